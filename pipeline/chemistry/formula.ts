@@ -60,7 +60,8 @@ export class FormulaError extends Error {
 // ---------------------------------------------------------------------------------------------
 // Phase suffixes
 
-const PHASE_WORDS: Readonly<Record<string, Phase>> = {
+/** Phase words accepted in a suffix, mapped to the canonical phase. */
+export const PHASE_WORDS: Readonly<Record<string, Phase>> = {
   g: 'g',
   gas: 'g',
   l: 'l',
@@ -151,15 +152,15 @@ function splitWithOffset(text: string, strict: boolean): SplitAt {
     const words = m[1]
       .split(/[,;\s]+/)
       .filter((w) => w.length > 0)
-      .map((w) => GREEK_STATE[w] ?? w);
+      .map((w) => (Object.hasOwn(GREEK_STATE, w) ? GREEK_STATE[w] : w));
     if (words.length === 0) break;
-    if (!words.every((w) => w in PHASE_WORDS || w in STATE_WORDS)) break;
+    if (!words.every((w) => Object.hasOwn(PHASE_WORDS, w) || Object.hasOwn(STATE_WORDS, w))) break;
     const groupStates: string[] = [];
-    const groupPhases = new Set(words.filter((w) => w in PHASE_WORDS).map((w) => PHASE_WORDS[w]));
+    const groupPhases = new Set(words.filter((w) => Object.hasOwn(PHASE_WORDS, w)).map((w) => PHASE_WORDS[w]));
     if (phase !== undefined) groupPhases.add(phase);
     if (groupPhases.size > 1 && !strict) break;
     for (const w of words) {
-      if (w in PHASE_WORDS) {
+      if (Object.hasOwn(PHASE_WORDS, w)) {
         const p = PHASE_WORDS[w];
         if (phase !== undefined && phase !== p) {
           throw new FormulaError(

@@ -233,6 +233,8 @@ describe('splitPhaseSuffix', () => {
     ['Fe(OH)3', { formula: 'Fe(OH)3' }],
     ['Fe(3+)', { formula: 'Fe(3+)' }],
     ['Cr(Cr)', { formula: 'Cr(Cr)' }],
+    ['H2O(toString)', { formula: 'H2O(toString)' }],
+    ['H2O(constructor)', { formula: 'H2O(constructor)' }],
     ['H2O(g,l)', { formula: 'H2O(g,l)' }],
     ['H2O(g)(l)', { formula: 'H2O(g)', phase: 'l' }],
   ])('%s', (text, expected) => {
