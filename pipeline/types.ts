@@ -113,6 +113,8 @@ export interface SpeciesRow {
   formulaText: string;
   formula: Formula;
   phase: Phase;
+  /** state word from the name or phase column, e.g. 'graphite', 'diamond', 'rhombic' */
+  state?: string;
   values: RowValues;
   cp?: CpSpec;
   /** 1-based column of each canonical field in the source, for locating findings. */
@@ -128,6 +130,7 @@ export interface Species {
   formulaText: string;
   formula: Formula;
   phase: Phase;
+  state?: string;
   dHf?: number; // J/mol
   dGf?: number; // J/mol
   S?: number; // J/(mol K)
@@ -173,11 +176,13 @@ export type FailOn = 'error' | 'warning' | 'never';
 
 /** What the inside of the pipeline reads: complete, validated, no undefined defaults. */
 export interface OptionsNormalized {
+  name: string; // dataset name for reports
   tables: { path: string; format: 'csv' | 'tsv' | 'json' | 'ndjson' }[];
   headerMap: Record<string, string>; // user header -> canonical column
   units: Record<string, string>; // canonical column -> unit
   useWindow: UseWindow;
   reactionsFile?: string;
+  waiversFile?: string;
   tolerances: Tolerances;
   failOn: FailOn;
   manifestPath?: string;

@@ -1,0 +1,92 @@
+// The whole run as one function: options in, a finished Report out. No argv, no clock, no terminal here.
+import { loadReference } from './chemistry/reference.js';
+import { ingestTable } from './ingest/table.js';
+import { fileDigest } from './provenance.js';
+import { SpeciesStore } from './records.js';
+import { RULES, SPECIES_RULES } from './rules/index.js';
+import type { CheckContext, Finding, OptionsNormalized, Report, Summary } from './types.js';
+
+export interface RunInfo {
+  version: string;
+  generatedAt: string;
+  /** called as rows are read, for a progress display */
+  onProgress?: (rowsRead: number) => void;
+}
+
+export function compareFindings(a: Finding, b: Finding): number {
+  const fa = a.location.file;
+  const fb = b.location.file;
+  if (fa !== fb) return fa < fb ? -1 : 1;
+  if (a.location.line !== b.location.line) return a.location.line - b.location.line;
+  const ca = a.location.column ?? 0;
+  const cb = b.location.column ?? 0;
+  if (ca !== cb) return ca - cb;
+  if (a.rule !== b.rule) return a.rule < b.rule ? -1 : 1;
+  return a.message < b.message ? -1 : a.message > b.message ? 1 : 0;
+}
+
+export function summarize(rows: number, accepted: number, rejected: number, species: number, findings: Finding[]): Summary {
+  let errors = 0;
+  let warnings = 0;
+  let infos = 0;
+  for (const f of findings) {
+    if (f.waived) continue;
+    if (f.severity === 'error') errors++;
+    else if (f.severity === 'warning') warnings++;
+    else infos++;
+  }
+  return { rows, accepted, rejected, species, errors, warnings, infos };
+}
+
+export async function check(options: OptionsNormalized, run: RunInfo): Promise<Report> {
+  const reference = loadReference();
+  const ctx: CheckContext = { options, reference };
+  const store = new SpeciesStore();
+  const findings: Finding[] = [];
+  const onFinding = (f: Finding): void => {
+    findings.push(f);
+  };
+  let rows = 0;
+  let read = 0; // accepted rows seen so far, for progress only
+  let accepted = 0;
+  let rejected = 0;
+  for (const table of options.tables) {
+    const counts = await ingestTable(
+      { path: table.path, format: table.format, headerMap: options.headerMap, units: options.units },
+      (row) => {
+        for (const f of store.add(row)) findings.push(f);
+        if (run.onProgress && ++read % 65536 === 0) run.onProgress(read);
+      },
+      onFinding,
+    );
+    rows += counts.rows;
+    accepted += counts.accepted;
+    rejected += counts.rejected;
+  }
+  const species = store.list();
+  for (const sp of species) {
+    for (const rule of SPECIES_RULES) for (const f of rule.check!(sp, ctx)) findings.push(f);
+  }
+  findings.sort(compareFindings);
+  const inputs = await Promise.all(options.tables.map((t) => fileDigest(t.path)));
+  return {
+    tool: { name: 'thermovet', version: run.version },
+    summary: summarize(rows, accepted, rejected, species.length, findings),
+    findings,
+    provenance: {
+      generatedAt: run.generatedAt,
+      inputs,
+      reference: { path: reference.path, sha256: reference.sha256 },
+      options: {
+        tables: options.tables,
+        manifest: options.manifestPath ?? null,
+        headerMap: options.headerMap,
+        units: options.units,
+        useWindow: options.useWindow,
+        tolerances: options.tolerances,
+        failOn: options.failOn,
+      },
+      rules: RULES.map((r) => r.id),
+    },
+  };
+}

@@ -1,0 +1,98 @@
+// CSV and TSV through csv-parse, streaming, no per-cell cast. Every record keeps its physical start line.
+import { createReadStream } from 'node:fs';
+import { parse, type CsvError } from 'csv-parse';
+import { InputError } from '../errors.js';
+import { LIMITS, type TableSink } from './events.js';
+import { sniff } from './sniff.js';
+
+/**
+ * Streams the table at `path` into `sink`. Lines are counted here rather than taken from the parser:
+ * a record starts on the line after the previous one ended, and spans one line more than the number of
+ * line feeds inside its quoted fields. Blank lines and lines starting with `#` are skipped but counted.
+ */
+export async function readDelimited(path: string, delimiter: ',' | '\t', sink: TableSink): Promise<void> {
+  sniff(path);
+  const parser = parse({
+    delimiter,
+    bom: true,
+    relax_column_count: true, // ragged rows become row findings, not a failed file
+    relax_quotes: true, // a stray quote inside a field stays in the field (and fails its number check)
+    max_record_size: LIMITS.maxRecordChars,
+  });
+  let nextLine = 1;
+  let headerSeen = false;
+  let width = 0;
+  const onRecord = (record: string[]): void => {
+    const line = nextLine;
+    let feeds = 0;
+    for (let i = 0; i < record.length; i++) {
+      const cell = record[i]!;
+      if (cell.length > 0 && cell.indexOf('\n') !== -1) feeds += countFeeds(cell);
+    }
+    nextLine += 1 + feeds;
+    if (record.length === 1 && record[0]!.trim() === '') return; // blank line
+    if (record[0]!.startsWith('#')) return; // comment line
+    if (!headerSeen) {
+      headerSeen = true;
+      width = record.length;
+      if (width > LIMITS.maxColumns) {
+        throw new InputError('too-many-columns', `the header has ${width} columns; thermovet reads at most ${LIMITS.maxColumns}`, { file: path, line });
+      }
+      if (width === 1) {
+        const other = [';', '\t', ',', '|'].find((d) => d !== delimiter && record[0]!.includes(d));
+        if (other) {
+          const name = other === '\t' ? 'a tab' : `"${other}"`;
+          throw new InputError('wrong-delimiter', `the header is one column; the file looks delimited by ${name}, not by ${delimiter === '\t' ? 'tabs' : 'commas'} (use --format or rename the file)`, { file: path, line });
+        }
+      }
+      sink({ type: 'header', cells: record, line });
+      return;
+    }
+    if (record.length !== width) {
+      sink({ type: 'unreadable', line, messageId: 'ragged', params: { found: record.length, expected: width } });
+      return;
+    }
+    sink({ type: 'row', cells: record, line });
+  };
+
+  await new Promise<void>((resolve, reject) => {
+    const input = createReadStream(path);
+    const fail = (e: unknown): void => {
+      input.destroy();
+      parser.destroy();
+      reject(e instanceof InputError ? e : csvProblem(e as CsvError, path, nextLine));
+    };
+    input.on('error', fail);
+    parser.on('error', fail);
+    parser.on('data', (record: string[]) => {
+      try {
+        onRecord(record);
+      } catch (e) {
+        fail(e);
+      }
+    });
+    parser.on('end', resolve);
+    input.pipe(parser);
+  });
+  if (!headerSeen) throw new InputError('empty-file', 'the file has no header and no rows', { file: path, line: 1 });
+}
+
+function countFeeds(s: string): number {
+  let n = 0;
+  for (let i = s.indexOf('\n'); i !== -1; i = s.indexOf('\n', i + 1)) n++;
+  return n;
+}
+
+function csvProblem(e: CsvError | NodeJS.ErrnoException, file: string, line: number): InputError {
+  const code = (e as { code?: string }).code ?? '';
+  if (code === 'CSV_QUOTE_NOT_CLOSED') {
+    return new InputError('unterminated-quote', `a quoted field opened on or after line ${line} is never closed; every row after it would be lost, so the file is not read`, { file, line });
+  }
+  if (code === 'CSV_MAX_RECORD_SIZE') {
+    return new InputError('record-too-large', `a record starting at line ${line} exceeds ${LIMITS.maxRecordChars} characters (a runaway quote or a corrupted file?)`, { file, line });
+  }
+  if (code === 'EISDIR') return new InputError('not-a-file', 'is a directory, not a table file', { file });
+  if (code === 'ENOENT') return new InputError('missing-file', 'no such file', { file });
+  if (code === 'EACCES') return new InputError('unreadable-file', 'permission denied', { file });
+  return new InputError('unreadable-file', `cannot be read as CSV near line ${line}: ${e.message}`, { file, line });
+}

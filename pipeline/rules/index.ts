@@ -1,0 +1,36 @@
+// The registry: every rule thermovet runs, in the order a reader meets them.
+// Row rules are raised while a table is read; species rules run over each folded species.
+import type { Rule } from '../types.js';
+import { rule as unreadableRow } from './unreadable-row.js';
+import { rule as missingField } from './missing-field.js';
+import { rule as badNumber } from './bad-number.js';
+import { rule as badPhase } from './bad-phase.js';
+import { rule as badFormula } from './bad-formula.js';
+import { rule as badCpSpec } from './bad-cp-spec.js';
+import { rule as unknownColumn } from './unknown-column.js';
+import { rule as duplicateRow } from './duplicate-row.js';
+import { rule as conflictingValues } from './conflicting-values.js';
+import { rule as incompleteSpecies } from './incomplete-species.js';
+import { rule as referenceElements } from './reference-elements.js';
+import { rule as gibbsHelmholtz } from './gibbs-helmholtz.js';
+
+export const RULES: readonly Rule[] = [
+  unreadableRow,
+  missingField,
+  badNumber,
+  badPhase,
+  badFormula,
+  badCpSpec,
+  unknownColumn,
+  duplicateRow,
+  conflictingValues,
+  incompleteSpecies,
+  referenceElements,
+  gibbsHelmholtz,
+];
+
+export const SPECIES_RULES: readonly Rule[] = RULES.filter((r) => r.check !== undefined);
+
+export function ruleById(id: string): Rule | undefined {
+  return RULES.find((r) => r.id === id);
+}

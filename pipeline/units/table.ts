@@ -1,0 +1,98 @@
+// Every unit thermovet accepts, by dimension, as an affine map to the internal SI unit:
+// si = value * factor + offset. Internal units: J/mol, J/(mol K), K, bar.
+// The thermochemical calorie is 4.184 J exactly (its definition).
+
+export type Dimension = 'molar-energy' | 'molar-entropy' | 'temperature' | 'pressure' | 'heat-capacity';
+
+export interface UnitDef {
+  name: string; // canonical spelling, used in messages
+  dimension: Dimension;
+  factor: number;
+  offset: number;
+}
+
+export const CAL_J = 4.184; // thermochemical calorie, exact by definition
+export const ATM_BAR = 1.01325; // standard atmosphere, exact: 101325 Pa
+export const R_J_PER_MOL_K = 8.314462618; // CODATA 2018, exact since the 2019 SI
+
+const defs: UnitDef[] = [
+  { name: 'J/mol', dimension: 'molar-energy', factor: 1, offset: 0 },
+  { name: 'kJ/mol', dimension: 'molar-energy', factor: 1000, offset: 0 },
+  { name: 'cal/mol', dimension: 'molar-energy', factor: CAL_J, offset: 0 },
+  { name: 'kcal/mol', dimension: 'molar-energy', factor: 1000 * CAL_J, offset: 0 },
+  { name: 'J/(mol K)', dimension: 'molar-entropy', factor: 1, offset: 0 },
+  { name: 'kJ/(mol K)', dimension: 'molar-entropy', factor: 1000, offset: 0 },
+  { name: 'cal/(mol K)', dimension: 'molar-entropy', factor: CAL_J, offset: 0 },
+  { name: 'K', dimension: 'temperature', factor: 1, offset: 0 },
+  { name: 'degC', dimension: 'temperature', factor: 1, offset: 273.15 },
+  { name: 'bar', dimension: 'pressure', factor: 1, offset: 0 },
+  { name: 'atm', dimension: 'pressure', factor: ATM_BAR, offset: 0 },
+  { name: 'Pa', dimension: 'pressure', factor: 1e-5, offset: 0 },
+  { name: 'kPa', dimension: 'pressure', factor: 1e-2, offset: 0 },
+  { name: 'MPa', dimension: 'pressure', factor: 10, offset: 0 },
+  // heat-capacity units for cp_unit (poly and table coefficients); 'R' means the values are Cp/R
+  { name: 'J/(mol K)', dimension: 'heat-capacity', factor: 1, offset: 0 },
+  { name: 'cal/(mol K)', dimension: 'heat-capacity', factor: CAL_J, offset: 0 },
+  { name: 'R', dimension: 'heat-capacity', factor: R_J_PER_MOL_K, offset: 0 },
+];
+
+/** Spellings users write, mapped to the canonical spelling. Keys are normalised by `unitKey`. */
+const aliases: Record<string, string> = {
+  'j/mol': 'J/mol',
+  'kj/mol': 'kJ/mol',
+  'cal/mol': 'cal/mol',
+  'kcal/mol': 'kcal/mol',
+  'j/(molk)': 'J/(mol K)',
+  'j/molk': 'J/(mol K)',
+  'j/(kmol)': 'J/(mol K)',
+  'j/kmol': 'J/(mol K)',
+  'j/mol/k': 'J/(mol K)',
+  'j/(mol*k)': 'J/(mol K)',
+  'j/(mol·k)': 'J/(mol K)',
+  'jmol-1k-1': 'J/(mol K)',
+  'kj/(molk)': 'kJ/(mol K)',
+  'kj/mol/k': 'kJ/(mol K)',
+  'cal/(molk)': 'cal/(mol K)',
+  'cal/molk': 'cal/(mol K)',
+  'cal/mol/k': 'cal/(mol K)',
+  'cal/(kmol)': 'cal/(mol K)',
+  'cal/(mol*k)': 'cal/(mol K)',
+  'cal/(mol·k)': 'cal/(mol K)',
+  'eu': 'cal/(mol K)', // the "entropy unit" of older tables
+  'k': 'K',
+  'kelvin': 'K',
+  'degc': 'degC',
+  '°c': 'degC',
+  'c': 'degC',
+  'celsius': 'degC',
+  'bar': 'bar',
+  'atm': 'atm',
+  'pa': 'Pa',
+  'kpa': 'kPa',
+  'mpa': 'MPa',
+  'r': 'R',
+  'cp/r': 'R',
+};
+
+/** Lower-case and drop whitespace, so `J/(mol K)`, `J/(mol·K)` and `j/mol/k` meet. */
+export function unitKey(text: string): string {
+  return text.trim().toLowerCase().replace(/\s+/g, '').replace(/⋅/g, '·');
+}
+
+/** Find a unit of the given dimension by any accepted spelling; undefined when unknown or of another dimension. */
+export function findUnit(text: string, dimension: Dimension): UnitDef | undefined {
+  const canonical = aliases[unitKey(text)];
+  if (canonical === undefined) return undefined;
+  return defs.find((d) => d.name === canonical && d.dimension === dimension);
+}
+
+/** The canonical spellings accepted for a dimension, for error messages. */
+export function unitsOf(dimension: Dimension): string[] {
+  return defs.filter((d) => d.dimension === dimension).map((d) => d.name);
+}
+
+export function unitByName(name: string, dimension: Dimension): UnitDef {
+  const d = defs.find((u) => u.name === name && u.dimension === dimension);
+  if (!d) throw new Error(`internal: no unit ${name} of ${dimension}`);
+  return d;
+}
