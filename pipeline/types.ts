@@ -208,10 +208,62 @@ export interface Summary {
   infos: number;
 }
 
+/** A species' Cp correlation as the report shows it (charts read this; they compute nothing themselves). */
+export interface CpSummary {
+  models: string[]; // distinct models, in range order
+  ranges: { model: string; Tmin: number; Tmax: number; file: string; line: number }[];
+  cp298?: number; // J/(mol K) at 298.15 K (extrapolated when outside every range)
+  /** Cp at the use window's ends (and listed temperatures), with kelvin outside the fitted ranges */
+  atWindow: { T: number; cp: number; outsideK: number }[];
+  /** a sampled curve for charts, present for at most CHART_SPECIES_LIMIT species (those in reactions first, then those with Cp findings) */
+  samples?: { T: number; cp: number; outsideK: number }[];
+}
+
+export interface SpeciesSummary {
+  key: string;
+  name: string;
+  phase: string;
+  formula: string; // Hill order, with charge
+  dHf?: number; // kJ/mol
+  dGf?: number; // kJ/mol
+  S?: number; // J/(mol K)
+  gibbsResidual?: number; // kJ/mol, when all three are given and the elements are known
+  location: Location;
+  cp?: CpSummary;
+}
+
+export interface ReactionPoint {
+  T: number; // K
+  lnK: number; // rigorous route
+  lnKShortcut: number; // constant-ΔrH° route from 298.15 K
+  dG: number; // ΔrG°(T), kJ/mol
+  dH: number; // ΔrH°(T), kJ/mol
+  dS: number; // ΔrS°(T), J/(mol K)
+  u_lnK?: number; // standard uncertainty propagated from stated uncertainties
+  /** species whose Cp is extrapolated at T, by how many kelvin, and the Cp the correlation gives there */
+  extrapolated: { species: string; outsideK: number; cp: number }[];
+}
+
+export interface ReactionResult {
+  id: string;
+  equation: string;
+  file: string;
+  line: number;
+  balanced: boolean;
+  points: ReactionPoint[];
+  /** species ranked by their share of u(ln K)² at the worst point */
+  uncertaintyRanking?: { species: string; share: number }[];
+}
+
+export const CHART_SPECIES_LIMIT = 200;
+
 export interface Report {
   tool: { name: string; version: string };
+  dataset?: { name: string; useWindow: UseWindow };
   summary: Summary;
   findings: Finding[];
+  species?: SpeciesSummary[];
+  reactions?: ReactionResult[];
   provenance: {
     generatedAt: string;
     inputs: { path: string; bytes: number; sha256: string }[];

@@ -1,0 +1,18 @@
+// What every command shares: the tool version, the report timestamp, the terminal's colour choice.
+import { readFileSync } from 'node:fs';
+import { join } from 'node:path';
+import { packageRoot } from '../paths.js';
+
+export const version = (JSON.parse(readFileSync(join(packageRoot(), 'package.json'), 'utf8')) as { version: string }).version;
+
+/** One timestamp per report; fixed by --deterministic or SOURCE_DATE_EPOCH (seconds) so reruns compare byte for byte. */
+export function generatedAt(deterministic: boolean): string {
+  const epoch = process.env.SOURCE_DATE_EPOCH;
+  if (epoch !== undefined && /^\d+$/.test(epoch)) return new Date(Number(epoch) * 1000).toISOString();
+  return deterministic ? new Date(0).toISOString() : new Date().toISOString();
+}
+
+/** Colour only on a terminal, and never when NO_COLOR is set, TERM is dumb or --no-color was given. */
+export function useColor(flag: boolean, stream: NodeJS.WriteStream = process.stdout): boolean {
+  return flag && !!stream.isTTY && process.env.NO_COLOR === undefined && process.env.TERM !== 'dumb';
+}
