@@ -15,6 +15,9 @@ import { requireFinite, unitFactorOf } from './validate.js';
 function powInt(T: number, q: number, lnT: number): number {
   if (q === 0) return lnT;
   const x = q * lnT;
+  // For a vanishing q·ln T (down to subnormal q, where expm1(x)/q is no longer exact) the series
+  // ln T (1 + x/2 + x²/6) is exact to rounding.
+  if (Math.abs(x) < 1e-5) return lnT * (1 + x * (0.5 + x / 6));
   // expm1 keeps the digits when T^q is near 1; elsewhere pow is the more accurate of the two.
   return Math.abs(x) < 0.5 ? Math.expm1(x) / q : (Math.pow(T, q) - 1) / q;
 }
