@@ -3,7 +3,7 @@
 
 import { describe, expect, test } from 'vitest';
 import { buildCurve, buildSegment, CpSpecError } from '../../pipeline/cp/index.js';
-import type { CpSegment } from '../../pipeline/types.js';
+import type { CpCurve, CpSegment } from '../../pipeline/types.js';
 import { SPECIES } from './published-data.js';
 import { integrateGL } from './quadrature.js';
 
@@ -130,7 +130,7 @@ describe('published NASA-7 pair (H2O(g), GRI-Mech 3.0, from memory)', () => {
 
 test('performance: dH and dS at 50 temperatures for 1000 species take milliseconds', () => {
   const rowsOf = SPECIES.flatMap((s) => [s.nasa7]);
-  const curves = [];
+  const curves: CpCurve[] = [];
   for (let i = 0; i < 1000; i++) {
     const rows = rowsOf[i % rowsOf.length];
     const scale = 1 + (i % 97) * 1e-4; // vary the species a little
