@@ -714,7 +714,7 @@ export function hillOrder(elements: Record<string, number>): string[] {
 }
 
 /**
- * The formula in Hill order with its charge: CH4, H2O, CuH10O9S, H4N+, O4S^2-, Fe^3+, e-.
+ * The formula in Hill order with its charge: CH4, H2O, CuH10O9S, H4N+, O4S^2-, Fe^3+, O2^-, e-.
  * Counts of 1 are omitted; fractional counts are written as decimals, bracketed when above 1 and
  * followed by another symbol ((C2.5)H6) so that the '.' cannot read as a hydrate separator.
  * The text parses back to `f`.
@@ -732,7 +732,8 @@ export function formatFormula(f: Formula): string {
   if (f.charge !== 0) {
     const s = f.charge > 0 ? '+' : '-';
     const z = Math.abs(f.charge);
-    out += z === 1 ? s : `^${String(z)}${s}`;
+    // a bare sign after a digit could read as a charge on a single atom (O2- = O²⁻?): use ^ there
+    out += z !== 1 ? `^${String(z)}${s}` : isDigit(out[out.length - 1]) ? `^${s}` : s;
   }
   return out;
 }

@@ -1,3 +1,4 @@
+import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import {
   FormulaError,
@@ -258,10 +259,27 @@ describe('formatFormula and atomCount', () => {
     ['CO2', 'CO2'],
     ['(C2.5)H6', 'C2.5H6'.replace('C2.5', '(C2.5)')],
     ['(Mg0.9Fe0.1)2SiO4', '(Fe0.2)(Mg1.8)O4Si'.replace('(Fe0.2)', 'Fe0.2')],
+    ['O2^-', 'O2^-'],
+    ['C2H3O2-', 'C2H3O2^-'],
   ])('%s is written %s in Hill order, and parses back', (text, hill) => {
     const f = parseFormula(text);
     expect(formatFormula(f)).toBe(hill);
     expect(parseFormula(hill)).toEqual(f);
+  });
+
+  it('round-trips any formula through formatFormula and parseFormula (property test)', () => {
+    const symbols = ['H', 'C', 'N', 'O', 'S', 'Cl', 'Fe', 'Na', 'Ca', 'Si', 'Al', 'Cu', 'I', 'Hg'];
+    const count = fc.oneof(fc.integer({ min: 1, max: 40 }), fc.constantFrom(0.5, 0.947, 1.5, 2.5, 12.25));
+    const formula = fc.record({
+      elements: fc.dictionary(fc.constantFrom(...symbols), count, { minKeys: 1, maxKeys: 6 }),
+      charge: fc.integer({ min: -4, max: 4 }),
+    });
+    fc.assert(
+      fc.property(formula, (f) => {
+        expect(parseFormula(formatFormula(f))).toEqual(f);
+      }),
+      { numRuns: 2000 },
+    );
   });
 
   it('counts atoms per formula unit', () => {
