@@ -1,7 +1,7 @@
 // Every Cp model against published thermochemical tables (sources beside the data in published-data.ts).
 
 import { describe, expect, test } from 'vitest';
-import { buildCurve, buildSegment } from '../../pipeline/cp/index.js';
+import { buildCurve, buildSegment, R_J_PER_MOL_K } from '../../pipeline/cp/index.js';
 import type { CpModelName, CpSegment } from '../../pipeline/types.js';
 import { JANAF, SPECIES } from './published-data.js';
 
@@ -107,7 +107,7 @@ for (const sp of SPECIES) {
     test('poly: the low NASA-7 range declared as Cp/R with exponents 0 1 2 3 4 equals the nasa7 model', () => {
       const r = sp.nasa7[0];
       const n7 = segmentsOf('nasa7', [r])[0];
-      const poly = buildSegment({ model: 'poly', coeffs: r.slice(2, 7), exponents: [0, 1, 2, 3, 4], unit: 'R', unitFactor: 8.314462618, Tmin: r[0], Tmax: r[1], location: loc });
+      const poly = buildSegment({ model: 'poly', coeffs: r.slice(2, 7), exponents: [0, 1, 2, 3, 4], unit: 'R', unitFactor: R_J_PER_MOL_K, Tmin: r[0], Tmax: r[1], location: loc });
       for (const T of [300, 500, 800]) {
         expect(poly.cp(T)).toBeCloseTo(n7.cp(T), 10);
         // antiderivatives differ by a constant only
