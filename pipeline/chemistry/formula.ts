@@ -70,7 +70,6 @@ export const PHASE_WORDS: Readonly<Record<string, Phase>> = {
   cr: 'cr',
   c: 'cr',
   s: 'cr',
-  cd: 'cr',
   solid: 'cr',
   aq: 'aq',
   ao: 'aq', // NBS tables: aqueous, undissociated
