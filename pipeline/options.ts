@@ -1,5 +1,5 @@
 // Options as users write them (CLI flags, manifest) -> one complete OptionsNormalized, validated once.
-import { readFileSync } from 'node:fs';
+import { readFileSync, statSync } from 'node:fs';
 import { basename, dirname, resolve, relative, isAbsolute } from 'node:path';
 import { InputError, excerpt } from './errors.js';
 import { COLUMN_BY_NAME } from './ingest/columns.js';
@@ -37,6 +37,14 @@ export function displayPath(p: string): string {
   const abs = resolve(p);
   const rel = relative(process.cwd(), abs);
   return rel && !rel.startsWith('..') && !isAbsolute(rel) ? rel : abs;
+}
+
+function isDirectory(path: string, manifest?: string): boolean {
+  try {
+    return statSync(manifest ? resolve(dirname(resolve(manifest)), path) : path).isDirectory();
+  } catch {
+    return false; // a missing file is reported when it is read
+  }
 }
 
 function lineOfText(file: string, needle: string): number | undefined {
@@ -116,6 +124,7 @@ export function normalizeOptions(o: Options): OptionsNormalized {
 }
 
 function pickFormat(path: string, declared: string | undefined, manifest?: string): TableFormat {
+  if (isDirectory(path, manifest)) throw new InputError('not-a-file', 'is a directory, not a table file', { file: path });
   if (declared) return declared as TableFormat;
   const f = formatFromPath(path);
   if (!f) {

@@ -55,7 +55,7 @@ export function loadStructured<T>(path: string, schemaFile: string, what: string
     const err = pickError(validate.errors ?? []);
     const node = nodeAt(doc.contents as Node | null, err.instancePath);
     const line = node?.range ? lineAt(node.range[0]) : 1;
-    throw new InputError('invalid-document', `${what}: ${describeError(err)}`, { file: path, line, field: err.instancePath || undefined });
+    throw new InputError('invalid-document', `${what}: ${describeError(err)}`, { file: path, line });
   }
   return data as T;
 }
