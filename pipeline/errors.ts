@@ -17,8 +17,9 @@ export class InputError extends Error {
 
   /** `file:line: message (field …)`, the one line a user sees. */
   describe(): string {
-    const at = this.file ? `${this.file}${this.line ? `:${this.line}` : ''}: ` : '';
-    const field = this.field ? ` [field ${this.field}]` : '';
+    // the file name and field come from the user's input (a manifest, a header): never print them raw
+    const at = this.file ? `${excerpt(this.file, Infinity)}${this.line ? `:${this.line}` : ''}: ` : '';
+    const field = this.field ? ` [field ${excerpt(this.field, 120)}]` : '';
     return `${at}${this.message}${field}`;
   }
 }
