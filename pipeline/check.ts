@@ -1,8 +1,11 @@
 // The whole run as one function: options in, a finished Report out. No argv, no clock, no terminal here.
+import { relative } from 'node:path';
 import { loadReference } from './chemistry/reference.js';
+import { packageRoot } from './paths.js';
 import { ingestTable } from './ingest/table.js';
 import { fileDigest } from './provenance.js';
 import { SpeciesStore } from './records.js';
+import { speciesSummary } from './summary.js';
 import { RULES, SPECIES_RULES } from './rules/index.js';
 import type { CheckContext, Finding, OptionsNormalized, Report, Summary } from './types.js';
 
@@ -71,12 +74,14 @@ export async function check(options: OptionsNormalized, run: RunInfo): Promise<R
   const inputs = await Promise.all(options.tables.map((t) => fileDigest(t.path)));
   return {
     tool: { name: 'thermovet', version: run.version },
+    dataset: { name: options.name, useWindow: options.useWindow },
     summary: summarize(rows, accepted, rejected, species.length, findings),
     findings,
+    species: species.map((sp) => speciesSummary(sp, reference)),
     provenance: {
       generatedAt: run.generatedAt,
       inputs,
-      reference: { path: reference.path, sha256: reference.sha256 },
+      reference: { path: relative(packageRoot(), reference.path), sha256: reference.sha256 },
       options: {
         tables: options.tables,
         manifest: options.manifestPath ?? null,

@@ -13,7 +13,9 @@ export interface UnitDef {
 
 export const CAL_J = 4.184; // thermochemical calorie, exact by definition
 export const ATM_BAR = 1.01325; // standard atmosphere, exact: 101325 Pa
-export const R_J_PER_MOL_K = 8.314462618; // CODATA 2018, exact since the 2019 SI
+export { R_J_PER_MOL_K } from '../cp/constants.js'; // one definition of R for the whole tool
+
+import { R_J_PER_MOL_K } from '../cp/constants.js';
 
 const defs: UnitDef[] = [
   { name: 'J/mol', dimension: 'molar-energy', factor: 1, offset: 0 },
