@@ -12,7 +12,11 @@ export function writeAtomic(path: string, content: string): void {
     writeFileSync(tmp, content);
     renameSync(tmp, path);
   } catch (e) {
-    rmSync(tmp, { force: true });
+    try {
+      rmSync(tmp, { force: true }); // `force` ignores only ENOENT; under a regular file this throws ENOTDIR
+    } catch {
+      // nothing was created there
+    }
     const code = (e as NodeJS.ErrnoException).code ?? 'error';
     throw new InputError('unwritable-output', `cannot write the report (${code})`, { file: path });
   }
