@@ -53,7 +53,9 @@ export function loadStructured<T>(path: string, schemaFile: string, what: string
   const validate = schemaValidator(schemaFile);
   if (!validate(data)) {
     const err = pickError(validate.errors ?? []);
-    const node = nodeAt(doc.contents as Node | null, err.instancePath);
+    // an unknown key is located at the key itself, not at the object that holds it
+    const extra = err.keyword === 'additionalProperties' ? String((err.params as { additionalProperty?: unknown }).additionalProperty) : undefined;
+    const node = nodeAt(doc.contents as Node | null, err.instancePath, extra);
     const line = node?.range ? lineAt(node.range[0]) : 1;
     throw new InputError('invalid-document', `${what}: ${describeError(err)}`, { file: path, line });
   }
@@ -84,7 +86,16 @@ function describeError(e: ErrorObject): string {
   }
 }
 
-function nodeAt(root: Node | null, pointer: string): Node | null {
+function nodeAt(root: Node | null, pointer: string, key?: string): Node | null {
+  let node: Node | null = atPointer(root, pointer);
+  if (key !== undefined && isMap(node)) {
+    const pair = node.items.find((it) => String((it.key as { value?: unknown })?.value ?? it.key) === key);
+    if (pair?.key) node = pair.key as Node;
+  }
+  return node;
+}
+
+function atPointer(root: Node | null, pointer: string): Node | null {
   let node: Node | null = root;
   for (const raw of pointer.split('/').slice(1)) {
     const key = raw.replace(/~1/g, '/').replace(/~0/g, '~');
