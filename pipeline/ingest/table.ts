@@ -34,9 +34,11 @@ export async function ingestTable(
   let ctx: RowContext | undefined;
   const reported = new Set<string>();
   const positional = table.format === 'csv' || table.format === 'tsv';
+  let headerLine: number | undefined;
   const sink = (ev: TableEvent): void => {
     if (ev.type === 'header') {
       if (ev.cells.length === 0) return;
+      headerLine ??= ev.line;
       // JSON records name their own keys, so a record without `phase` is that row's problem, not the file's
       const layout = resolveHeader(ev.cells, file, ev.line, table.headerMap, table.units, positional);
       for (const ig of layout.ignored) {
@@ -70,6 +72,11 @@ export async function ingestTable(
   } catch (e) {
     if (e instanceof InputError && e.file === undefined) throw new InputError(e.code, e.message, { file, line: e.line, field: e.field });
     throw e;
+  }
+  if (counts.rows === 0) {
+    // a table cut down to its header (or an empty JSON array) must not pass as a clean table
+    const what = positional ? 'the table has a header but no data rows' : 'the table holds no records';
+    throw new InputError('no-rows', `${what}; there is nothing to check`, { file, line: headerLine ?? 1 });
   }
   return counts;
 }
