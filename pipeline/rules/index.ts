@@ -13,6 +13,9 @@ import { rule as conflictingValues } from './conflicting-values.js';
 import { rule as incompleteSpecies } from './incomplete-species.js';
 import { rule as referenceElements } from './reference-elements.js';
 import { rule as gibbsHelmholtz } from './gibbs-helmholtz.js';
+import { rule as standardPressure } from './standard-pressure.js';
+import { rule as waiverExpired } from './waiver-expired.js';
+import { rule as waiverUnmatched } from './waiver-unmatched.js';
 
 export const RULES: readonly Rule[] = [
   unreadableRow,
@@ -27,6 +30,10 @@ export const RULES: readonly Rule[] = [
   incompleteSpecies,
   referenceElements,
   gibbsHelmholtz,
+  standardPressure,
+  // raised when a waivers file is applied to the finished findings (pipeline/waivers.ts)
+  waiverExpired,
+  waiverUnmatched,
 ];
 
 export const SPECIES_RULES: readonly Rule[] = RULES.filter((r) => r.check !== undefined);
