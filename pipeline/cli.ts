@@ -2,6 +2,7 @@
 // The only place that reads argv and sets the exit code; each command lives in pipeline/commands/.
 import { Command, CommanderError } from 'commander';
 import { registerCheck } from './commands/check.js';
+import { registerLnk } from './commands/lnk.js';
 import { version } from './commands/shared.js';
 import { InputError } from './errors.js';
 
@@ -15,6 +16,7 @@ function program(): Command {
     .exitOverride()
     .configureOutput({ writeErr: (s) => process.stderr.write(s) });
   registerCheck(p);
+  registerLnk(p);
   return p;
 }
 

@@ -1,0 +1,157 @@
+// What each finding costs in ln K, for every computed reaction that uses the finding's species.
+//
+// ln K is linear in each species' g_i(T) = H_i(T) − T·S_i(T): changing one species' data by δg_i(T)
+// moves ln K by −ν_i·δg_i(T)/(RT). So no reaction is recomputed: each finding needs δg_i at the
+// reaction's temperatures only, and the largest |Δln K| over those temperatures (with the temperature
+// where it occurs) is recorded in finding.impact, one entry per reaction, largest first.
+//
+// δg_i by kind of finding:
+//   1. A diagnosis (a known slip with its corrected value, in the declared unit): the data as given
+//      against the corrected value (converted to SI with the column's declared unit). A corrected
+//      value in a field the route does not read (ΔfG° when ΔfH° and S° are given) moves ln K by 0.
+//   2. A Cp extrapolation (rule ids containing 'extrapolat' or 'coverage'): the rigorous route
+//      against the same curve with Cp frozen at its value at the nearest end of the fitted range
+//      outside it. The spread is how much the answer hangs on the extrapolated polynomial.
+//   3. A Gibbs–Helmholtz residual without a diagnosis: one of the three values is off by the residual
+//      r, but which is unknown, so each value the route reads is moved in turn (ΔfH° or ΔfG° by r,
+//      S° by r/298.15 K) and the largest shift is kept.
+//   4. Any other finding on a formation field (the finding's field): that field moved by its stated
+//      standard uncertainty, else by the screening default (1 kJ/mol for ΔfH° and ΔfG°, 1 J/(mol K)
+//      for S°; our choice, not a published value).
+//   5. A finding on the species with no field: the species' own share of u(ln K), from its stated
+//      uncertainties or the same defaults, root-sum-square over the values the route reads.
+import { R_J_PER_MOL_K, T_REF_K } from '../cp/constants.js';
+import { fromDeclared } from '../units/convert.js';
+import type { CpCurve, Finding } from '../types.js';
+import type { ResolvedReaction } from './reactions.js';
+import type { SpeciesThermo } from './thermo.js';
+import { fieldsUsed, lnKSensitivity, type Field } from './uncertainty.js';
+
+/** Screening defaults for a value whose uncertainty the table does not state (SI units). */
+export const DEFAULT_UNCERTAINTY: Readonly<Record<Field, number>> = { dHf: 1000, dGf: 1000, S: 1 };
+
+const FIELDS: readonly Field[] = ['dHf', 'dGf', 'S'];
+const isField = (f: unknown): f is Field => typeof f === 'string' && (FIELDS as readonly string[]).includes(f);
+
+/** ΔfH° and S° the route would use with some values replaced (SI). */
+export function valuesWith(th: SpeciesThermo, o: Partial<Record<Field, number>>): { dHf: number; S: number } {
+  switch (th.route) {
+    case 'HS':
+      return { dHf: o.dHf ?? th.dHf, S: o.S ?? th.S };
+    case 'HG': {
+      const dHf = o.dHf ?? th.dHf;
+      return { dHf, S: th.elementS! + (dHf - (o.dGf ?? th.dGf!)) / T_REF_K };
+    }
+    case 'GS': {
+      const S = o.S ?? th.S;
+      return { dHf: (o.dGf ?? th.dGf!) + T_REF_K * (S - th.elementS!), S };
+    }
+  }
+}
+
+/** H(T) − H(298.15) with Cp frozen at the range ends outside the fitted range, J/mol. */
+export function frozenDH(c: CpCurve, T: number): number {
+  const lo = c.Tmin;
+  const hi = c.Tmax;
+  const clamp = (x: number): number => Math.min(hi, Math.max(lo, x));
+  return c.dH(clamp(T)) - c.dH(clamp(T_REF_K)) + c.cp(lo) * (Math.min(T, lo) - Math.min(T_REF_K, lo)) + c.cp(hi) * (Math.max(T, hi) - Math.max(T_REF_K, hi));
+}
+
+/** S(T) − S(298.15) with Cp frozen at the range ends outside the fitted range, J/(mol K). */
+export function frozenDS(c: CpCurve, T: number): number {
+  const lo = c.Tmin;
+  const hi = c.Tmax;
+  const clamp = (x: number): number => Math.min(hi, Math.max(lo, x));
+  return (
+    c.dS(clamp(T)) -
+    c.dS(clamp(T_REF_K)) +
+    c.cp(lo) * (Math.log(Math.min(T, lo)) - Math.log(Math.min(T_REF_K, lo))) +
+    c.cp(hi) * (Math.log(Math.max(T, hi)) - Math.log(Math.max(T_REF_K, hi)))
+  );
+}
+
+/** The kind of consequence a finding has (see the header), or undefined when it has none to compute. */
+type Effect = (th: SpeciesThermo, nu: number, T: number) => number; // |Δln K| at T
+
+function effectOf(f: Finding, th: SpeciesThermo): Effect | undefined {
+  const R = R_J_PER_MOL_K;
+  const shift = (o: Partial<Record<Field, number>>): Effect => {
+    const v = valuesWith(th, o);
+    const dH = v.dHf - th.dHf;
+    const dS = v.S - th.S;
+    return (_t, nu, T) => Math.abs((nu * (dH - T * dS)) / (R * T));
+  };
+  if (f.rule === 'reaction-data') return undefined; // no Cp at all: nothing to compare against
+  const d = f.diagnosis;
+  if (d && isField(d.field)) {
+    const corrected = fromDeclared(d.corrected, d.field, th.species.units[d.field]);
+    return shift({ [d.field]: corrected });
+  }
+  if (/extrapolat|coverage/.test(f.rule)) {
+    const c = th.curve;
+    if (!c) return undefined;
+    return (_t, nu, T) => {
+      const dg = frozenDH(c, T) - c.dH(T) - T * (frozenDS(c, T) - c.dS(T));
+      return Math.abs((nu * dg) / (R * T));
+    };
+  }
+  const used = fieldsUsed(th);
+  if (f.rule === 'gibbs-helmholtz' && typeof f.params.residual === 'number') {
+    const r = Math.abs(f.params.residual) * 1000;
+    const effects = used.map((x) => shift({ [x]: (x === 'dHf' ? th.dHf : x === 'S' ? th.S : th.dGf!) + (x === 'S' ? r / T_REF_K : r) }));
+    return (t, nu, T) => Math.max(...effects.map((e) => e(t, nu, T)));
+  }
+  const u = (x: Field): number => th.species.u[x] ?? DEFAULT_UNCERTAINTY[x];
+  const field = isField(f.location.field) ? f.location.field : isField(f.params.field) ? f.params.field : undefined;
+  if (field) {
+    if (!used.includes(field)) return () => 0;
+    return (t, nu, T) => Math.abs(lnKSensitivity(t, nu, T)[field]! * u(field));
+  }
+  return (t, nu, T) => {
+    const s = lnKSensitivity(t, nu, T);
+    return Math.hypot(...used.map((x) => s[x]! * u(x)));
+  };
+}
+
+/**
+ * Sets `impact` on every finding about a species (finding.species + finding.phase) that takes part
+ * in one of the computed reactions: per reaction, the largest |Δln K| over its temperatures and the
+ * temperature where it occurs, largest first. Findings on other species are left as they are.
+ * Each reaction holds its species' thermo records (curves built once), so this is O(findings ×
+ * reactions using that species × temperatures) curve evaluations.
+ */
+export function impactOfFindings(findings: Finding[], reactions: readonly ResolvedReaction[]): void {
+  const uses = new Map<string, { r: ResolvedReaction; nu: number; th: SpeciesThermo }[]>();
+  for (const r of reactions) {
+    for (const t of r.terms) {
+      const key = t.thermo.species.key;
+      const list = uses.get(key);
+      const entry = { r, nu: t.coeff, th: t.thermo };
+      if (list) list.push(entry);
+      else uses.set(key, [entry]);
+    }
+  }
+  for (const f of findings) {
+    if (f.species === undefined || f.phase === undefined) continue;
+    const list = uses.get(`${f.species}|${f.phase}`);
+    if (!list) continue;
+    // a reaction-level finding speaks for its own reaction only
+    const own = f.rule.startsWith('reaction-') ? list.filter((u) => u.r.file === f.location.file && u.r.line === f.location.line) : list;
+    const impact: NonNullable<Finding['impact']> = [];
+    for (const { r, nu, th } of own) {
+      const effect = effectOf(f, th);
+      if (!effect) continue;
+      let max = 0;
+      let atT = r.temps[0]!;
+      for (const T of r.temps) {
+        const e = effect(th, nu, T);
+        if (e > max) {
+          max = e;
+          atT = T;
+        }
+      }
+      impact.push({ reaction: r.id, maxAbsDeltaLnK: max, T_K: atT });
+    }
+    if (impact.length) f.impact = impact.sort((a, b) => b.maxAbsDeltaLnK - a.maxAbsDeltaLnK || (a.reaction < b.reaction ? -1 : 1));
+  }
+}
