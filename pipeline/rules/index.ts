@@ -1,6 +1,7 @@
 // The registry: every rule thermovet runs, in the order a reader meets them.
 // Row rules are raised while a table is read; species rules run over each folded species.
 import type { Rule } from '../types.js';
+import { isDatasetRule, type DatasetRule } from './dataset.js';
 import { rule as unreadableRow } from './unreadable-row.js';
 import { rule as missingField } from './missing-field.js';
 import { rule as badNumber } from './bad-number.js';
@@ -13,6 +14,9 @@ import { rule as conflictingValues } from './conflicting-values.js';
 import { rule as incompleteSpecies } from './incomplete-species.js';
 import { rule as referenceElements } from './reference-elements.js';
 import { rule as gibbsHelmholtz } from './gibbs-helmholtz.js';
+import { rule as crossSource } from './cross-source.js';
+import { rule as familyTrend } from './family-trend.js';
+import { rule as entropyAtoms } from './entropy-atoms.js';
 import { rule as standardPressure } from './standard-pressure.js';
 import { rule as waiverExpired } from './waiver-expired.js';
 import { rule as waiverUnmatched } from './waiver-unmatched.js';
@@ -30,6 +34,10 @@ export const RULES: readonly Rule[] = [
   incompleteSpecies,
   referenceElements,
   gibbsHelmholtz,
+  crossSource,
+  // dataset rules: judged over the whole species list (checkAll), see DATASET_RULES
+  familyTrend,
+  entropyAtoms,
   standardPressure,
   // raised when a waivers file is applied to the finished findings (pipeline/waivers.ts)
   waiverExpired,
@@ -37,6 +45,9 @@ export const RULES: readonly Rule[] = [
 ];
 
 export const SPECIES_RULES: readonly Rule[] = RULES.filter((r) => r.check !== undefined);
+
+/** Rules that compare species with each other; check() runs them once over the whole species list. */
+export const DATASET_RULES: readonly DatasetRule[] = RULES.filter(isDatasetRule);
 
 export function ruleById(id: string): Rule | undefined {
   return RULES.find((r) => r.id === id);
