@@ -1,0 +1,157 @@
+// One Cp curve per species and one dense scan per Cp range, built on first use and kept for as long
+// as the Species (or CpSpec) object lives. Every Cp rule and the report summary read these, so a
+// species' segments are built once however many rules look at them.
+//
+// A scan samples Cp on a grid that is the union of a linear and a logarithmic grid over the range
+// (the logarithmic one resolves the T⁻¹ and T⁻² terms near the low end), plus any listed temperatures
+// (a tabulated Cp has its extremes on its nodes). Every sampled local minimum and maximum is then
+// refined by golden-section search between its two neighbouring samples, so the extremes found are
+// those of the function, not of the grid.
+
+import type { CpCurve, CpSegment, CpSpec, Location, Species } from '../types.js';
+import { buildCurve, buildSegment } from './index.js';
+
+export interface SpeciesCp {
+  /** the species' Cp specifications, sorted by Tmin (the order Species.cp keeps) */
+  specs: CpSpec[];
+  /** segments[i] is built from specs[i] */
+  segments: CpSegment[];
+  curve: CpCurve;
+}
+
+export interface CpPoint {
+  T: number; // K
+  cp: number; // J/(mol K)
+}
+
+export interface CpScan {
+  /** the sampled points, ascending in T, first and last at the ends of the interval */
+  samples: CpPoint[];
+  min: CpPoint;
+  max: CpPoint;
+}
+
+const LINEAR_POINTS = 96;
+const LOG_POINTS = 64;
+const GOLDEN_ITERATIONS = 60; // shrinks a bracket by 0.618^60 ≈ 3e-13
+
+const bySpecies = new WeakMap<Species, SpeciesCp | null>();
+const bySpec = new WeakMap<CpSpec, { segment: CpSegment; scan?: CpScan }>();
+
+/** The species' segments and joined curve; undefined when it has no Cp or a range cannot be built. */
+export function speciesCp(sp: Species): SpeciesCp | undefined {
+  const hit = bySpecies.get(sp);
+  if (hit !== undefined) return hit ?? undefined;
+  let built: SpeciesCp | null = null;
+  if (sp.cp.length > 0) {
+    try {
+      const specs = sp.cp.slice().sort((a, b) => a.Tmin - b.Tmin || a.Tmax - b.Tmax);
+      const segments = specs.map(segmentOf);
+      built = { specs, segments, curve: buildCurve(segments) };
+    } catch {
+      built = null; // ingest rejects specs that do not build; a hand-made Species may still carry one
+    }
+  }
+  bySpecies.set(sp, built);
+  return built ?? undefined;
+}
+
+/** The analytic segment of one Cp specification, built once. Throws CpSpecError like buildSegment. */
+export function segmentOf(spec: CpSpec): CpSegment {
+  let e = bySpec.get(spec);
+  if (!e) {
+    e = { segment: buildSegment(spec) };
+    bySpec.set(spec, e);
+  }
+  return e.segment;
+}
+
+/** The dense scan of one range over its own [Tmin, Tmax], built once. */
+export function scanOf(spec: CpSpec): CpScan {
+  const segment = segmentOf(spec);
+  const e = bySpec.get(spec)!;
+  if (!e.scan) e.scan = scanFunction((T) => segment.cp(T), spec.Tmin, spec.Tmax, spec.temps);
+  return e.scan;
+}
+
+/** Sample grid over [a, b] (0 < a < b): linear ∪ logarithmic ∪ extra points inside, ascending, unique. */
+export function sampleGrid(a: number, b: number, extra: readonly number[] = []): number[] {
+  const pts: number[] = [];
+  for (let i = 0; i <= LINEAR_POINTS; i++) pts.push(a + ((b - a) * i) / LINEAR_POINTS);
+  if (a > 0) {
+    const r = Math.log(b / a);
+    for (let i = 1; i < LOG_POINTS; i++) pts.push(a * Math.exp((r * i) / LOG_POINTS));
+  }
+  for (const t of extra) if (t > a && t < b) pts.push(t);
+  pts.sort((x, y) => x - y);
+  const out: number[] = [];
+  for (const t of pts) if (out.length === 0 || t > out[out.length - 1]) out.push(t);
+  out[0] = a;
+  out[out.length - 1] = b;
+  return out;
+}
+
+/** Golden-section search for the minimum of f on [lo, hi] (f unimodal there). */
+export function goldenMin(f: (T: number) => number, lo: number, hi: number): CpPoint {
+  const g = (Math.sqrt(5) - 1) / 2;
+  let a = lo;
+  let b = hi;
+  let c = b - g * (b - a);
+  let d = a + g * (b - a);
+  let fc = f(c);
+  let fd = f(d);
+  for (let i = 0; i < GOLDEN_ITERATIONS && b - a > 1e-9 * Math.max(1, Math.abs(a)); i++) {
+    if (fc <= fd) {
+      b = d;
+      d = c;
+      fd = fc;
+      c = b - g * (b - a);
+      fc = f(c);
+    } else {
+      a = c;
+      c = d;
+      fc = fd;
+      d = a + g * (b - a);
+      fd = f(d);
+    }
+  }
+  return fc <= fd ? { T: c, cp: fc } : { T: d, cp: fd };
+}
+
+/**
+ * Samples f densely over [a, b] and finds its minimum and maximum: the best sampled point, refined by
+ * golden-section search between the neighbours of every sampled local extremum, and the two ends.
+ */
+export function scanFunction(f: (T: number) => number, a: number, b: number, extra: readonly number[] = []): CpScan {
+  const Ts = sampleGrid(a, b, extra);
+  const samples = Ts.map((T) => ({ T, cp: f(T) }));
+  let min = samples[0];
+  let max = samples[0];
+  for (const s of samples) {
+    if (s.cp < min.cp) min = s;
+    if (s.cp > max.cp) max = s;
+  }
+  for (let i = 1; i < samples.length - 1; i++) {
+    const [p, s, n] = [samples[i - 1], samples[i], samples[i + 1]];
+    if (s.cp <= p.cp && s.cp <= n.cp) {
+      const m = goldenMin(f, p.T, n.T);
+      if (m.cp < min.cp) min = m;
+    }
+    if (s.cp >= p.cp && s.cp >= n.cp) {
+      const m = goldenMin((T) => -f(T), p.T, n.T);
+      if (-m.cp > max.cp) max = { T: m.T, cp: -m.cp };
+    }
+  }
+  return { samples, min, max };
+}
+
+/** The location of a Cp row, pointing at one of its fields when the table says where that field is. */
+export function cpLocation(sp: Species, spec: CpSpec, field?: string): Location {
+  const loc: Location = { file: spec.location.file, line: spec.location.line };
+  if (field !== undefined) {
+    const column = sp.columns[field];
+    if (column !== undefined) loc.column = column;
+    loc.field = field;
+  }
+  return loc;
+}

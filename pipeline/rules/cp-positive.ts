@@ -1,0 +1,37 @@
+// Cp > 0 everywhere inside each declared range. The minimum is found by a dense scan refined by
+// golden-section search (pipeline/cp/curve-cache.ts), not only at sample points.
+// Aqueous species are exempt: the standard partial molar heat capacity of a solute is not a heat
+// capacity of a substance and is often negative (most simple ions).
+import { cpLocation, scanOf, speciesCp } from '../cp/curve-cache.js';
+import type { Finding, Rule, Species } from '../types.js';
+import { makeFinding } from './finding.js';
+
+export const rule: Rule = {
+  id: 'cp-positive',
+  severity: 'error',
+  docs: 'docs/rules/cp-positive.md',
+  description: 'Cp must be positive everywhere inside each declared validity range.',
+  messages: {
+    notPositive: 'Cp falls to {cp} J/(mol K) at {T} K inside the range {Tmin}–{Tmax} K ({model}); a heat capacity must be positive',
+  },
+};
+
+const r5 = (x: number): number => Number(x.toPrecision(5));
+
+rule.check = (sp: Species): Finding[] => {
+  if (sp.phase === 'aq') return [];
+  const cp = speciesCp(sp);
+  if (!cp) return [];
+  const findings: Finding[] = [];
+  for (const spec of cp.specs) {
+    const { min } = scanOf(spec);
+    if (min.cp > 0) continue;
+    findings.push(
+      makeFinding(rule, 'notPositive', { cp: r5(min.cp), T: r5(min.T), Tmin: spec.Tmin, Tmax: spec.Tmax, model: spec.model }, cpLocation(sp, spec, 'cp_coeffs'), {
+        species: sp.name,
+        phase: sp.phase,
+      }),
+    );
+  }
+  return findings;
+};
