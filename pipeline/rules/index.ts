@@ -17,6 +17,13 @@ import { rule as gibbsHelmholtz } from './gibbs-helmholtz.js';
 import { rule as crossSource } from './cross-source.js';
 import { rule as familyTrend } from './family-trend.js';
 import { rule as entropyAtoms } from './entropy-atoms.js';
+import { rule as cpPositive } from './cp-positive.js';
+import { rule as cpGasBounds } from './cp-gas-bounds.js';
+import { rule as cpSolidBounds } from './cp-solid-bounds.js';
+import { rule as cpWiggles } from './cp-wiggles.js';
+import { rule as cpJoins } from './cp-joins.js';
+import { rule as cpCoverage } from './cp-coverage.js';
+import { rule as cpEmbeddedConstants } from './cp-embedded-constants.js';
 import { rule as standardPressure } from './standard-pressure.js';
 import { rule as waiverExpired } from './waiver-expired.js';
 import { rule as waiverUnmatched } from './waiver-unmatched.js';
@@ -39,6 +46,13 @@ export const RULES: readonly Rule[] = [
   familyTrend,
   entropyAtoms,
   standardPressure,
+  cpPositive,
+  cpGasBounds,
+  cpSolidBounds,
+  cpWiggles,
+  cpJoins,
+  cpCoverage,
+  cpEmbeddedConstants,
   // raised when a waivers file is applied to the finished findings (pipeline/waivers.ts)
   waiverExpired,
   waiverUnmatched,
