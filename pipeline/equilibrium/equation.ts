@@ -63,7 +63,7 @@ export function splitTerms(side: string): string[] {
     const rest = side.slice(i + 1);
     // `^3+ ` and `(2+)` are charges, `H+ + OH-`: the first '+' is followed by another '+'
     if (before === '^' || before === '{') continue;
-    if (spaced || (i > start && TERM_START.test(rest) && !/^\s*\+/.test(rest) && !chargeDigitsThenEnd(rest))) {
+    if (spaced || (i > start && TERM_START.test(rest) && !/^\s*\+/.test(rest) && !chargeDigitsThenEnd(rest) && !PHASE_GROUP.test(rest))) {
       out.push(side.slice(start, i));
       start = i + 1;
     }
@@ -71,6 +71,9 @@ export function splitTerms(side: string): string[] {
   out.push(side.slice(start));
   return out.map((t) => t.trim());
 }
+
+/** `Fe^3+(aq)`: a bracket of lowercase words right after the '+' is the phase suffix of a charged species. */
+const PHASE_GROUP = /^\([a-zα-δ,;\s]*\)/;
 
 /** `Fe+3` / `Fe+3(aq)`: digits after the '+' that end the term (nothing but a phase suffix follows) are a charge. */
 function chargeDigitsThenEnd(rest: string): boolean {

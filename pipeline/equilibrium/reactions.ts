@@ -203,11 +203,12 @@ export function loadReactions(path: string): { reactions: ReactionSpec[]; findin
   return { reactions, findings };
 }
 
-/** Builds a spec from an equation given directly (command line, manifest); throws EquationError. */
+/**
+ * Builds a spec from an equation given directly (command line, manifest); throws EquationError.
+ * Its balance is checked (and reported) by resolveReactions.
+ */
 export function reactionFromEquation(id: string, equation: string, where: { file: string; line: number }, temps: { temps?: number[]; Tmin?: number; Tmax?: number } = {}): ReactionSpec {
-  const spec: ReactionSpec = { id, equation, file: where.file, line: where.line, terms: parseEquation(equation).terms, ...temps };
-  if (balanceAsWritten(spec)) spec.balancedAsWritten = false;
-  return spec;
+  return { id, equation, file: where.file, line: where.line, terms: parseEquation(equation).terms, ...temps };
 }
 
 function describeResidual(residual: Record<string, number>): string {
@@ -368,7 +369,7 @@ export function resolveReactions(specs: readonly ReactionSpec[], species: readon
         findings.push(makeFinding(reactionSpecies, 'unknown', { id, term: excerpt(term.text), hint: m.hint }, where));
       }
     }
-    if (spec.balancedAsWritten === false) continue; // already reported
+    if (spec.balancedAsWritten === false) continue; // reported by loadReactions
     if (!ok) continue;
     const terms = [...merged.values()].filter((t) => Math.abs(t.coeff) > 1e-12);
     if (terms.length === 0) {
