@@ -7,6 +7,11 @@ import { check } from '../check.js';
 import { normalizeOptions, type Options } from '../options.js';
 import { exitCodeFor } from '../verdict.js';
 import { generatedAt, useColor, version } from './shared.js';
+import { renderHtml } from '../../reports/html/template.js';
+import { createProgress, estimateRows } from '../../reports/progress.js';
+import { fieldColumns, renderSarif } from '../../reports/sarif.js';
+import { fileDigest } from '../provenance.js';
+import { loadWaivers, waiveReport } from '../waivers.js';
 
 interface CheckFlags {
   manifest?: string;
@@ -16,14 +21,34 @@ interface CheckFlags {
   quiet?: boolean;
   color: boolean;
   deterministic?: boolean;
+  html?: string;
+  sarif?: string;
+  waivers?: string;
 }
 
 async function runCheck(tables: string[], flags: CheckFlags): Promise<number> {
   const o: Options = { tables, failOn: flags.failOn };
   if (flags.manifest) o.manifest = flags.manifest;
   if (flags.format) o.format = flags.format;
+  if (flags.waivers) o.waivers = flags.waivers;
   const options = normalizeOptions(o);
-  const report = await check(options, { version, generatedAt: generatedAt(!!flags.deterministic) });
+  // waivers, progress, HTML and SARIF (issue 6): the waivers file is read first so a bad one stops the run early
+  const stamp = generatedAt(!!flags.deterministic);
+  const waivers = options.waiversFile ? loadWaivers(options.waiversFile) : undefined;
+  const progress = createProgress({ stream: process.stderr, enabled: !flags.quiet });
+  let report;
+  try {
+    const expected = estimateRows(options.tables.map((t) => t.path));
+    report = await check(options, { version, generatedAt: stamp, onProgress: (rows) => progress.update('reading rows', rows, Math.max(expected, rows + 1)) });
+    if (waivers && options.waiversFile) {
+      report = waiveReport(report, waivers, stamp.slice(0, 10)); // the day of the run: the clock's, or the fixed one of a deterministic run
+      report = { ...report, provenance: { ...report.provenance, inputs: [...report.provenance.inputs, await fileDigest(options.waiversFile)] } };
+    }
+    if (flags.sarif) writeAtomic(flags.sarif, renderSarif(report, { columns: await fieldColumns(report) }));
+    if (flags.html) writeAtomic(flags.html, await renderHtml(report, { onChart: (done, total) => progress.update('drawing charts', done, total) }));
+  } finally {
+    progress.finish();
+  }
   if (flags.json) writeAtomic(flags.json, renderJson(report));
   if (!flags.quiet) process.stdout.write(renderTerminal(report, { color: useColor(flags.color), failOn: options.failOn }));
   return exitCodeFor(report.summary, options.failOn);
@@ -36,6 +61,9 @@ export function registerCheck(program: Command): void {
     .argument('[tables...]', 'CSV, TSV, JSON or NDJSON tables (or list them in the manifest)')
     .option('-m, --manifest <file>', 'dataset manifest (YAML or JSON)')
     .option('--json <out>', 'write the JSON report to this file')
+    .option('--html <out>', 'write the HTML report (self-contained, no script) to this file')
+    .option('--sarif <out>', 'write a SARIF 2.1.0 log to this file, for CI annotations')
+    .option('--waivers <file>', 'waivers file (YAML or JSON); overrides the manifest\'s waivers:')
     .addOption(new Option('--fail-on <severity>', 'lowest severity that fails the run').choices(['error', 'warning', 'never']).default('error'))
     .addOption(new Option('--format <format>', 'table format when the extension does not tell').choices(['csv', 'tsv', 'json', 'ndjson']))
     .option('-q, --quiet', 'print nothing to the terminal; the exit code and the reports still tell')
