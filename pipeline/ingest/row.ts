@@ -78,7 +78,13 @@ export function normalizeRow(cells: readonly (string | undefined)[], line: numbe
       return undefined;
     }
     const u = slot.unit;
-    return u ? v * u.factor + u.offset : v;
+    const si = u ? v * u.factor + u.offset : v;
+    if (!Number.isFinite(si)) {
+      // finite as written, but not once converted to SI (1e306 kcal/mol)
+      findings.push(makeFinding(badNumber, 'notFinite', { field: name, text: excerpt(raw) }, loc(slot), ids));
+      return undefined;
+    }
+    return si;
   };
   const list = (name: string, unitSlot?: ColumnSlot): number[] | undefined => {
     const slot = layout.byName.get(name);
@@ -95,6 +101,10 @@ export function normalizeRow(cells: readonly (string | undefined)[], line: numbe
       }
       const u = (unitSlot ?? slot).unit;
       out[i] = u ? v * u.factor + u.offset : v;
+      if (!Number.isFinite(out[i])) {
+        findings.push(makeFinding(badNumber, 'notFinite', { field: name, text: excerpt(parts[i]!) }, loc(slot), ids));
+        return undefined;
+      }
     }
     return out;
   };
