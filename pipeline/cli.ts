@@ -3,6 +3,7 @@
 import { Command, CommanderError } from 'commander';
 import { registerCheck } from './commands/check.js';
 import { registerLnk } from './commands/lnk.js';
+import { registerDiff } from './commands/diff.js';
 import { version } from './commands/shared.js';
 import { InputError } from './errors.js';
 
@@ -17,6 +18,7 @@ function program(): Command {
     .configureOutput({ writeErr: (s) => process.stderr.write(s) });
   registerCheck(p);
   registerLnk(p);
+  registerDiff(p);
   return p;
 }
 
