@@ -86,7 +86,12 @@ export async function runRows(rows: readonly CpRow[], useWindow?: UseWindow): Pr
   } else {
     options = normalizeOptions({ tables: [table] });
   }
-  return check(options, { version: 'test', generatedAt: '1970-01-01T00:00:00.000Z' });
+  const report = await check(options, { version: 'test', generatedAt: '1970-01-01T00:00:00.000Z' });
+  // a defect test that passes because its row was rejected on ingest would prove nothing
+  if (report.summary.rejected > 0) {
+    throw new Error(`rows rejected on ingest: ${report.findings.map((f) => `line ${f.location.line} ${f.rule}: ${f.message}`).join('; ')}`);
+  }
+  return report;
 }
 
 /** The findings of the Cp rules only. */
