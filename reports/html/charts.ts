@@ -183,7 +183,7 @@ export function gibbsChartSpec(species: SpeciesSummary[], tol: Tolerance): { spe
             type: 'quantitative' as const,
             title: 'ΔfG° − (ΔfH° − T·ΔfS°) at 298.15 K (kJ/mol, symmetric-log axis)',
             scale: { type: 'symlog' as const, constant: Math.max(tol.warningKJ, 1e-3) },
-            axis: { values: ticks, format: '~g' },
+            axis: { values: ticks, format: '~r' },
           },
           color: {
             field: 'status',

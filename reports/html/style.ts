@@ -30,7 +30,7 @@ code, .mono { font-family: ui-monospace, "DejaVu Sans Mono", Menlo, Consolas, mo
 .caution { border: 1px solid var(--ink); padding: 0.7rem 1rem; margin: 1rem 0; background: var(--tint); }
 .caution p { margin: 0.2rem 0; }
 nav.toc { font-size: 0.95rem; margin: 1rem 0; }
-nav.toc ol { margin: 0.3rem 0; padding-left: 1.4rem; columns: 2; }
+nav.toc ol { margin: 0.3rem 0; padding-left: 1.4rem; }
 table { border-collapse: collapse; width: 100%; margin: 0.4rem 0 0.8rem; font-size: 0.92rem; }
 th, td { text-align: left; vertical-align: top; padding: 0.3rem 0.5rem; border-bottom: 1px solid var(--rule); }
 th { font-weight: 600; border-bottom: 1.5px solid var(--ink); }
@@ -40,6 +40,7 @@ td.num, th.num { text-align: right; font-variant-numeric: tabular-nums; white-sp
 .sev.warning { color: var(--warning); background: var(--warning-bg); }
 .sev.info { color: var(--info); background: var(--info-bg); }
 .where { white-space: nowrap; }
+td.rule code { white-space: nowrap; overflow: hidden; text-overflow: ellipsis; display: block; }
 .diag, .impact, .waiver { display: block; margin-top: 0.2rem; font-size: 0.88rem; }
 .diag { color: var(--ink); }
 .diag::before { content: "Diagnosis: "; font-weight: 600; }
@@ -58,7 +59,10 @@ figcaption { font-size: 0.88rem; color: var(--muted); margin-top: 0.3rem; max-wi
 .note { color: var(--muted); font-size: 0.9rem; }
 pre { background: var(--tint); padding: 0.6rem 0.8rem; overflow-x: auto; font-size: 0.82rem; white-space: pre-wrap; overflow-wrap: anywhere; }
 footer { margin-top: 3rem; padding-top: 0.8rem; border-top: 1px solid var(--rule); font-size: 0.88rem; color: var(--muted); }
-@media (max-width: 700px) { nav.toc ol { columns: 1; } .where { white-space: normal; } }
+table.findings { table-layout: fixed; }
+table.findings col.c-sev { width: 8rem; } table.findings col.c-where { width: 16.5rem; } table.findings col.c-rule { width: 11.5rem; }
+table.findings td.where { white-space: normal; }
+@media (max-width: 800px) { table.findings { table-layout: auto; } }
 @media print {
   @page { margin: 14mm; }
   html { font-size: 10pt; }

@@ -80,7 +80,8 @@ function findingRow(f: Finding): string {
   let cell = esc(f.message);
   const d = f.diagnosis;
   if (d) {
-    cell += `<span class="diag">${esc(d.cause)} in ${esc(d.field)}; corrected value ${n(d.corrected, d.unit)} leaves a residual of ${n(d.residualAfter)}.</span>`;
+    const after = `${n(Number(d.residualAfter.toPrecision(3)))}${f.rule === 'gibbs-helmholtz' ? ' kJ/mol' : ''}`;
+    cell += `<span class="diag">${esc(d.cause)} in ${esc(d.field)}; the corrected value ${n(d.corrected, d.unit)} leaves a residual of ${after}.</span>`;
   }
   const impact = impactOf(f);
   if (impact > 0) {
@@ -93,7 +94,7 @@ function findingRow(f: Finding): string {
   return (
     `<tr class="${f.waived ? 'waived' : ''}"><td><span class="sev ${esc(f.severity)}">${SEV_MARK[f.severity] ?? esc(f.severity)}${f.waived ? ' (waived)' : ''}</span></td>` +
     `<td class="where"><code>${esc(at)}</code>${f.location.field ? `<br><span class="note">${esc(f.location.field)}</span>` : ''}</td>` +
-    `<td><code title="${esc(rule?.description ?? '')}">${esc(f.rule)}</code></td><td>${cell}</td></tr>`
+    `<td class="rule"><code title="${esc(rule?.description ?? '')}">${esc(f.rule)}</code></td><td>${cell}</td></tr>`
   );
 }
 
@@ -124,7 +125,8 @@ function findingsSection(report: Report, chartAnchor: Map<string, string>): stri
     const anchor = g.anchorKey ? chartAnchor.get(g.anchorKey) : undefined;
     out.push(
       `<div class="group"><h3>${esc(g.title)}${g.phase ? ` <span class="phase">(${esc(g.phase)})</span>` : ''}${anchor ? `<a href="#${anchor}">Cp chart</a>` : ''}</h3>` +
-        '<table><thead><tr><th>severity</th><th>where</th><th>rule</th><th>finding</th></tr></thead><tbody>' +
+        '<table class="findings"><colgroup><col class="c-sev"><col class="c-where"><col class="c-rule"><col></colgroup>' +
+        '<thead><tr><th>severity</th><th>where</th><th>rule</th><th>finding</th></tr></thead><tbody>' +
         g.list.map(findingRow).join('') +
         '</tbody></table></div>',
     );
