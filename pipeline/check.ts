@@ -6,8 +6,9 @@ import { ingestTable } from './ingest/table.js';
 import { fileDigest } from './provenance.js';
 import { SpeciesStore } from './records.js';
 import { speciesSummary } from './summary.js';
-import { RULES, SPECIES_RULES } from './rules/index.js';
-import type { CheckContext, Finding, OptionsNormalized, Report, Summary } from './types.js';
+import { DATASET_RULES, RULES, SPECIES_RULES } from './rules/index.js';
+import { impactOfFindings, loadReactions, runEquilibrium } from './equilibrium/index.js';
+import type { CheckContext, Finding, OptionsNormalized, ReactionResult, Report, Summary } from './types.js';
 
 export interface RunInfo {
   version: string;
@@ -70,14 +71,26 @@ export async function check(options: OptionsNormalized, run: RunInfo): Promise<R
   for (const sp of species) {
     for (const rule of SPECIES_RULES) for (const f of rule.check!(sp, ctx)) findings.push(f);
   }
+  for (const rule of DATASET_RULES) for (const f of rule.checkAll(species, ctx)) findings.push(f);
+  // the equilibrium stage: ln K for the reactions of interest, then what each finding costs in ln K
+  let reactions: ReactionResult[] | undefined;
+  if (options.reactionsFile) {
+    const loaded = loadReactions(options.reactionsFile);
+    const eq = runEquilibrium(loaded.reactions, species, reference, options.useWindow);
+    for (const f of loaded.findings) findings.push(f);
+    for (const f of eq.findings) findings.push(f);
+    impactOfFindings(findings, eq.resolved);
+    reactions = eq.results;
+  }
   findings.sort(compareFindings);
-  const inputs = await Promise.all(options.tables.map((t) => fileDigest(t.path)));
+  const inputs = await Promise.all([...options.tables.map((t) => t.path), ...(options.reactionsFile ? [options.reactionsFile] : [])].map((p) => fileDigest(p)));
   return {
     tool: { name: 'thermovet', version: run.version },
     dataset: { name: options.name, useWindow: options.useWindow },
     summary: summarize(rows, accepted, rejected, species.length, findings),
     findings,
     species: species.map((sp) => speciesSummary(sp, reference)),
+    ...(reactions ? { reactions } : {}),
     provenance: {
       generatedAt: run.generatedAt,
       inputs,
@@ -85,6 +98,7 @@ export async function check(options: OptionsNormalized, run: RunInfo): Promise<R
       options: {
         tables: options.tables,
         manifest: options.manifestPath ?? null,
+        reactions: options.reactionsFile ?? null,
         headerMap: options.headerMap,
         units: options.units,
         useWindow: options.useWindow,

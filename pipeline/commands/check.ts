@@ -24,6 +24,7 @@ interface CheckFlags {
   html?: string;
   sarif?: string;
   waivers?: string;
+  reactions?: string;
 }
 
 async function runCheck(tables: string[], flags: CheckFlags): Promise<number> {
@@ -31,6 +32,7 @@ async function runCheck(tables: string[], flags: CheckFlags): Promise<number> {
   if (flags.manifest) o.manifest = flags.manifest;
   if (flags.format) o.format = flags.format;
   if (flags.waivers) o.waivers = flags.waivers;
+  if (flags.reactions) o.reactions = flags.reactions;
   const options = normalizeOptions(o);
   // waivers, progress, HTML and SARIF (issue 6): the waivers file is read first so a bad one stops the run early
   const stamp = generatedAt(!!flags.deterministic);
@@ -63,6 +65,7 @@ export function registerCheck(program: Command): void {
     .option('--json <out>', 'write the JSON report to this file')
     .option('--html <out>', 'write the HTML report (self-contained, no script) to this file')
     .option('--sarif <out>', 'write a SARIF 2.1.0 log to this file, for CI annotations')
+    .option('-r, --reactions <file>', 'reactions of interest (CSV: id, equation, Tmin, Tmax or id, equation, T); overrides the manifest\'s reactions:')
     .option('--waivers <file>', 'waivers file (YAML or JSON); overrides the manifest\'s waivers:')
     .addOption(new Option('--fail-on <severity>', 'lowest severity that fails the run').choices(['error', 'warning', 'never']).default('error'))
     .addOption(new Option('--format <format>', 'table format when the extension does not tell').choices(['csv', 'tsv', 'json', 'ndjson']))

@@ -27,6 +27,7 @@ import { rule as cpEmbeddedConstants } from './cp-embedded-constants.js';
 import { rule as standardPressure } from './standard-pressure.js';
 import { rule as waiverExpired } from './waiver-expired.js';
 import { rule as waiverUnmatched } from './waiver-unmatched.js';
+import { EQUILIBRIUM_RULES } from '../equilibrium/rules.js';
 
 export const RULES: readonly Rule[] = [
   unreadableRow,
@@ -53,6 +54,8 @@ export const RULES: readonly Rule[] = [
   cpJoins,
   cpCoverage,
   cpEmbeddedConstants,
+  // raised while reactions are read, resolved and computed (pipeline/equilibrium)
+  ...EQUILIBRIUM_RULES,
   // raised when a waivers file is applied to the finished findings (pipeline/waivers.ts)
   waiverExpired,
   waiverUnmatched,
