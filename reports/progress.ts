@@ -44,7 +44,7 @@ export function createProgress(opts: ProgressOptions): Progress {
       } else {
         line = `${label} ${done.toLocaleString('en-US')}  ${secs} s`;
       }
-      const width = Math.max(20, (opts.stream.columns ?? 80) - 1);
+      const width = Math.max(20, (opts.stream.columns || 80) - 1); // a pty that reports 0 columns gets 80
       opts.stream.write(`\r\u001b[2K${line.slice(0, width)}`);
       drawn = true;
     },
