@@ -4,6 +4,7 @@ import { Command, CommanderError } from 'commander';
 import { registerCheck } from './commands/check.js';
 import { registerLnk } from './commands/lnk.js';
 import { registerDiff } from './commands/diff.js';
+import { registerExport } from './commands/export.js';
 import { version } from './commands/shared.js';
 import { InputError } from './errors.js';
 
@@ -19,6 +20,7 @@ function program(): Command {
   registerCheck(p);
   registerLnk(p);
   registerDiff(p);
+  registerExport(p);
   return p;
 }
 
