@@ -1,5 +1,5 @@
 // CSV and TSV through csv-parse, streaming, no per-cell cast. Every record keeps its physical start line.
-import { createReadStream } from 'node:fs';
+import { closeSync, createReadStream, openSync, readSync } from 'node:fs';
 import { parse, type CsvError } from 'csv-parse';
 import { InputError } from '../errors.js';
 import { LIMITS, type TableSink } from './events.js';
@@ -12,14 +12,19 @@ import { sniff } from './sniff.js';
  */
 export async function readDelimited(path: string, delimiter: ',' | '\t', sink: TableSink): Promise<void> {
   sniff(path);
+  const preamble = preambleLines(path);
   const parser = parse({
+    // csv-parse takes the width of its first record as the expected one and builds an error object
+    // (stack trace, deep copy of the record) for every record of another width, even when relaxed; a
+    // comment line before the header would make that every row, so it starts at the header line
+    from_line: preamble + 1,
     delimiter,
     bom: true,
     relax_column_count: true, // ragged rows become row findings, not a failed file
     relax_quotes: true, // a stray quote inside a field stays in the field (and fails its number check)
     max_record_size: LIMITS.maxRecordChars,
   });
-  let nextLine = 1;
+  let nextLine = preamble + 1;
   let headerSeen = false;
   let width = 0;
   const onRecord = (record: string[]): void => {
@@ -75,6 +80,27 @@ export async function readDelimited(path: string, delimiter: ',' | '\t', sink: T
     input.pipe(parser);
   });
   if (!headerSeen) throw new InputError('empty-file', 'the file has no header and no rows', { file: path, line: 1 });
+}
+
+/** How many whole lines at the top of the file are blank or `#` comments (looked for in the first 64 KiB). */
+function preambleLines(path: string): number {
+  const buf = Buffer.alloc(64 * 1024);
+  const fd = openSync(path, 'r');
+  let n: number;
+  try {
+    n = readSync(fd, buf, 0, buf.length, 0);
+  } finally {
+    closeSync(fd);
+  }
+  const lines = buf.subarray(0, n).toString('utf8').replace(/^\uFEFF/, '').split('\n');
+  let count = 0;
+  // the last piece may be cut off by the buffer's end: only lines followed by a line feed count
+  for (let i = 0; i < lines.length - 1; i++) {
+    const line = lines[i]!;
+    if (line.trim() !== '' && !line.startsWith('#')) break;
+    count++;
+  }
+  return count;
 }
 
 function countFeeds(s: string): number {
