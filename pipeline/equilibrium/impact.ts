@@ -70,8 +70,12 @@ export function frozenDS(c: CpCurve, T: number): number {
   );
 }
 
-/** The kind of consequence a finding has (see the header), or undefined when it has none to compute. */
-type Effect = (th: SpeciesThermo, nu: number, T: number) => number; // |Δln K| at T
+/**
+ * |Δln K| per unit |ν| at T for one finding on one species, or undefined when it has no consequence
+ * to compute. Every kind is linear in the stoichiometric coefficient, so one evaluation per
+ * temperature serves every reaction that uses the species at those temperatures.
+ */
+type Effect = (T: number) => number;
 
 function effectOf(f: Finding, th: SpeciesThermo): Effect | undefined {
   const R = R_J_PER_MOL_K;
@@ -79,7 +83,7 @@ function effectOf(f: Finding, th: SpeciesThermo): Effect | undefined {
     const v = valuesWith(th, o);
     const dH = v.dHf - th.dHf;
     const dS = v.S - th.S;
-    return (_t, nu, T) => Math.abs((nu * (dH - T * dS)) / (R * T));
+    return (T) => Math.abs((dH - T * dS) / (R * T));
   };
   if (f.rule === 'reaction-data') return undefined; // no Cp at all: nothing to compare against
   const d = f.diagnosis;
@@ -90,43 +94,52 @@ function effectOf(f: Finding, th: SpeciesThermo): Effect | undefined {
   if (/extrapolat|coverage/.test(f.rule)) {
     const c = th.curve;
     if (!c) return undefined;
-    return (_t, nu, T) => {
-      const dg = frozenDH(c, T) - c.dH(T) - T * (frozenDS(c, T) - c.dS(T));
-      return Math.abs((nu * dg) / (R * T));
-    };
+    return (T) => Math.abs((frozenDH(c, T) - c.dH(T) - T * (frozenDS(c, T) - c.dS(T))) / (R * T));
   }
   const used = fieldsUsed(th);
   if (f.rule === 'gibbs-helmholtz' && typeof f.params.residual === 'number') {
     const r = Math.abs(f.params.residual) * 1000;
     const effects = used.map((x) => shift({ [x]: (x === 'dHf' ? th.dHf : x === 'S' ? th.S : th.dGf!) + (x === 'S' ? r / T_REF_K : r) }));
-    return (t, nu, T) => Math.max(...effects.map((e) => e(t, nu, T)));
+    return (T) => Math.max(...effects.map((e) => e(T)));
   }
   const u = (x: Field): number => th.species.u[x] ?? DEFAULT_UNCERTAINTY[x];
   const field = isField(f.location.field) ? f.location.field : isField(f.params.field) ? f.params.field : undefined;
   if (field) {
     if (!used.includes(field)) return () => 0;
-    return (t, nu, T) => Math.abs(lnKSensitivity(t, nu, T)[field]! * u(field));
+    return (T) => Math.abs(lnKSensitivity(th, 1, T)[field]! * u(field));
   }
-  return (t, nu, T) => {
-    const s = lnKSensitivity(t, nu, T);
+  return (T) => {
+    const s = lnKSensitivity(th, 1, T);
     return Math.hypot(...used.map((x) => s[x]! * u(x)));
   };
+}
+
+interface Use {
+  r: ResolvedReaction;
+  nu: number;
+  th: SpeciesThermo;
+  /** the reaction's temperatures as a key, so reactions sharing them share the evaluation */
+  tKey: string;
 }
 
 /**
  * Sets `impact` on every finding about a species (finding.species + finding.phase) that takes part
  * in one of the computed reactions: per reaction, the largest |Δln K| over its temperatures and the
- * temperature where it occurs, largest first. Findings on other species are left as they are.
- * Each reaction holds its species' thermo records (curves built once), so this is O(findings ×
- * reactions using that species × temperatures) curve evaluations.
+ * temperature where it occurs, largest first. A reaction-level finding (rule id 'reaction-…')
+ * speaks for its own reaction only. Findings on other species are left as they are.
+ * Cost: per finding, one evaluation per distinct temperature list of the reactions using its species
+ * (the species' curve was built once, at resolution), then one multiplication per reaction.
  */
 export function impactOfFindings(findings: Finding[], reactions: readonly ResolvedReaction[]): void {
-  const uses = new Map<string, { r: ResolvedReaction; nu: number; th: SpeciesThermo }[]>();
+  const uses = new Map<string, Use[]>();
+  const keyOf = new Map<readonly number[], string>();
   for (const r of reactions) {
+    let tKey = keyOf.get(r.temps);
+    if (tKey === undefined) keyOf.set(r.temps, (tKey = r.temps.join(' ')));
     for (const t of r.terms) {
       const key = t.thermo.species.key;
+      const entry = { r, nu: t.coeff, th: t.thermo, tKey };
       const list = uses.get(key);
-      const entry = { r, nu: t.coeff, th: t.thermo };
       if (list) list.push(entry);
       else uses.set(key, [entry]);
     }
@@ -135,23 +148,24 @@ export function impactOfFindings(findings: Finding[], reactions: readonly Resolv
     if (f.species === undefined || f.phase === undefined) continue;
     const list = uses.get(`${f.species}|${f.phase}`);
     if (!list) continue;
-    // a reaction-level finding speaks for its own reaction only
     const own = f.rule.startsWith('reaction-') ? list.filter((u) => u.r.file === f.location.file && u.r.line === f.location.line) : list;
+    if (own.length === 0) continue;
+    const effect = effectOf(f, own[0]!.th); // one species, one thermo record
+    if (!effect) continue;
+    const best = new Map<string, { max: number; T: number }>();
     const impact: NonNullable<Finding['impact']> = [];
-    for (const { r, nu, th } of own) {
-      const effect = effectOf(f, th);
-      if (!effect) continue;
-      let max = 0;
-      let atT = r.temps[0]!;
-      for (const T of r.temps) {
-        const e = effect(th, nu, T);
-        if (e > max) {
-          max = e;
-          atT = T;
+    for (const { r, nu, tKey } of own) {
+      let b = best.get(tKey);
+      if (!b) {
+        b = { max: 0, T: r.temps[0]! };
+        for (const T of r.temps) {
+          const e = effect(T);
+          if (e > b.max) b = { max: e, T };
         }
+        best.set(tKey, b);
       }
-      impact.push({ reaction: r.id, maxAbsDeltaLnK: max, T_K: atT });
+      impact.push({ reaction: r.id, maxAbsDeltaLnK: Math.abs(nu) * b.max, T_K: b.T });
     }
-    if (impact.length) f.impact = impact.sort((a, b) => b.maxAbsDeltaLnK - a.maxAbsDeltaLnK || (a.reaction < b.reaction ? -1 : 1));
+    f.impact = impact.sort((a, b) => b.maxAbsDeltaLnK - a.maxAbsDeltaLnK || (a.reaction < b.reaction ? -1 : a.reaction > b.reaction ? 1 : 0));
   }
 }

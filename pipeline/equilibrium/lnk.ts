@@ -17,7 +17,7 @@ import { makeFinding } from '../rules/finding.js';
 import type { Finding, ReactionPoint, ReactionResult } from '../types.js';
 import type { ResolvedReaction } from './reactions.js';
 import { reactionData, reactionExtrapolation } from './rules.js';
-import { uncertaintyAt, uncertaintyRanking } from './uncertainty.js';
+import { fieldsUsed, uncertaintyAt, uncertaintyRanking } from './uncertainty.js';
 
 /** A ReactionPoint plus the species whose missing Cp forced ΔrCp = 0 (absent when the route is rigorous). */
 export interface EquilibriumPoint extends ReactionPoint {
@@ -56,6 +56,7 @@ export function computeReaction(r: ResolvedReaction, temps: readonly number[] = 
   const R = R_J_PER_MOL_K;
   const at298 = reactionAt298(r);
   const missing = cpMissing(r);
+  const stated = r.terms.some((t) => fieldsUsed(t.thermo).some((f) => t.thermo.species.u[f] !== undefined));
   const points: EquilibriumPoint[] = [];
   for (const T of temps) {
     let dH = at298.dH;
@@ -86,7 +87,7 @@ export function computeReaction(r: ResolvedReaction, temps: readonly number[] = 
       dS,
       extrapolated,
     };
-    const u = uncertaintyAt(r, T);
+    const u = stated ? uncertaintyAt(r, T) : undefined;
     if (u) p.u_lnK = u.u;
     if (missing.length) p.cpMissing = missing;
     points.push(p);

@@ -236,30 +236,76 @@ function balanceAsWritten(spec: ReactionSpec): Finding | undefined {
 // ---------------------------------------------------------------------------------------------
 // Resolution against the table
 
-/** Species looked up by name and by formula (Hill order with charge). Build once, reuse for every reaction. */
+/**
+ * Species looked up by name and by formula (Hill order with charge), for the names and formulas the
+ * reactions ask for. `prepare` indexes a batch of them in one pass over the table: a name is one set
+ * lookup per species; a formula is first compared by a cheap signature (element count, atom count,
+ * charge), so only the few species that pass have their formula written out. A table of 10^6 species
+ * thus costs one fast pass, not a map of 10^6 names and 10^6 formula renderings.
+ */
 export class SpeciesIndex {
   private readonly byName = new Map<string, Species[]>();
-  private byFormula?: Map<string, Species[]>;
-  readonly thermo = new Map<string, SpeciesThermo | ReturnType<typeof thermoOf>>();
+  private readonly byFormula = new Map<string, Species[]>();
+  private readonly thermo = new Map<string, ReturnType<typeof thermoOf>>();
 
   constructor(
     readonly species: readonly Species[],
     readonly reference: ReferenceData,
-  ) {
-    for (const sp of species) push(this.byName, sp.name, sp);
-  }
+  ) {}
 
-  named(name: string): Species[] {
-    return this.byName.get(name) ?? [];
-  }
-
-  /** Species with this formula; the formula index is built on first use. */
-  withFormula(f: Formula): Species[] {
-    if (!this.byFormula) {
-      this.byFormula = new Map();
-      for (const sp of this.species) push(this.byFormula, formatFormula(sp.formula), sp);
+  /** Indexes the species having any of these names or formulas, in one pass over the table. */
+  prepare(names: readonly string[], formulas: readonly Formula[]): void {
+    const wantedNames = new Set<string>();
+    for (const n of names) {
+      if (this.byName.has(n)) continue;
+      this.byName.set(n, []);
+      wantedNames.add(n);
     }
-    return this.byFormula.get(formatFormula(f)) ?? [];
+    const wanted = new Map<string, Set<string>>(); // signature -> formula keys
+    for (const f of formulas) {
+      const key = formulaKey(f);
+      if (this.byFormula.has(key)) continue;
+      this.byFormula.set(key, []);
+      const sig = signature(f);
+      const set = wanted.get(sig);
+      if (set) set.add(key);
+      else wanted.set(sig, new Set([key]));
+    }
+    if (wantedNames.size === 0 && wanted.size === 0) return;
+    for (const sp of this.species) {
+      if (wantedNames.has(sp.name)) this.byName.get(sp.name)!.push(sp);
+      if (wanted.size === 0) continue;
+      const keys = wanted.get(signature(sp.formula));
+      if (!keys) continue;
+      const key = formulaKey(sp.formula);
+      if (keys.has(key)) this.byFormula.get(key)!.push(sp);
+    }
+  }
+
+  /** Indexes every name and formula the terms of these reactions use. */
+  prepareFor(specs: readonly ReactionSpec[]): void {
+    const names: string[] = [];
+    const formulas: Formula[] = [];
+    for (const s of specs) {
+      for (const t of s.terms) {
+        names.push(t.text, t.bare);
+        if (t.formula) formulas.push(t.formula);
+      }
+    }
+    this.prepare(names, formulas);
+  }
+
+  /** Species with this name. */
+  named(name: string): Species[] {
+    if (!this.byName.has(name)) this.prepare([name], []);
+    return this.byName.get(name)!;
+  }
+
+  /** Species with this formula. */
+  withFormula(f: Formula): Species[] {
+    const key = formulaKey(f);
+    if (!this.byFormula.has(key)) this.prepare([], [f]);
+    return this.byFormula.get(key)!;
   }
 
   /** The thermo record of a species, computed once. */
@@ -271,6 +317,25 @@ export class SpeciesIndex {
     }
     return t;
   }
+}
+
+/** Formula keys by Formula object: parseFormula returns one frozen object per distinct text. */
+const formulaKeys = new WeakMap<Formula, string>();
+function formulaKey(f: Formula): string {
+  let k = formulaKeys.get(f);
+  if (k === undefined) formulaKeys.set(f, (k = formatFormula(f)));
+  return k;
+}
+
+/** Number of elements, total atoms and charge: equal for equal formulas, cheap to compute. */
+function signature(f: Formula): string {
+  let n = 0;
+  let atoms = 0;
+  for (const el in f.elements) {
+    n++;
+    atoms += f.elements[el]!;
+  }
+  return `${n}|${Math.round(atoms * 1e6)}|${f.charge}`;
 }
 
 function push<K, V>(m: Map<K, V[]>, k: K, v: V): void {
@@ -344,6 +409,7 @@ export interface ResolveOutcome {
  */
 export function resolveReactions(specs: readonly ReactionSpec[], species: readonly Species[] | SpeciesIndex, reference: ReferenceData, window: UseWindow = {}): ResolveOutcome {
   const index = species instanceof SpeciesIndex ? species : new SpeciesIndex(species, reference);
+  index.prepareFor(specs);
   const resolved: ResolvedReaction[] = [];
   const results: ReactionResult[] = [];
   const findings: Finding[] = [];
