@@ -109,3 +109,17 @@ describe('thermovet lnk (built CLI)', () => {
     expect(r.stderr).not.toMatch(NO_STACK);
   });
 });
+
+describe('schemas/reactions.schema.json', () => {
+  it('accepts the reactions of lnk --format json, computed, refused and without Cp alike', async () => {
+    const { Ajv } = await import('ajv');
+    const { readFileSync } = await import('node:fs');
+    const validate = new Ajv({ allErrors: true, strict: false }).compile(JSON.parse(readFileSync('schemas/reactions.schema.json', 'utf8')));
+    const noCp = file('nocp.csv', TABLE.split('\n').filter((l) => !l.startsWith('NH3')).join('\n') + '\nNH3,g,-45.898,-16.367,192.77,,,,,\n');
+    const reactions = file('r5.csv', 'id,equation,T\nok,CO + H2O(g) = CO2 + H2,298.15 1500\nbad,N2 + H2 = 2NH3,500\nnh3,N2 + 3H2 = 2NH3,500\n');
+    const out = JSON.parse(thermovet(['lnk', noCp, '-r', reactions, '--format', 'json']).stdout);
+    expect(out.reactions.map((r: { points: unknown[] }) => r.points.length)).toEqual([2, 0, 1]);
+    expect(out.reactions[2].points[0].cpMissing).toEqual(['NH3(g)']);
+    expect(validate(out.reactions), JSON.stringify(validate.errors)).toBe(true);
+  });
+});
