@@ -58,18 +58,24 @@ export interface SourceValue {
   row: RowValues;
 }
 
+/** A row's source: its `source` text; a row without one stands for its file (tables merged from several files). */
+export function sourceOf(row: RowValues): string {
+  return row.source !== '' ? row.source : `(no source: ${row.location.file})`;
+}
+
 /** One value per distinct source (the first row of that source that gives the field), in input order. */
 export function sourceValues(sp: Species, field: CrossField): SourceValue[] {
   const seen = new Set<string>();
   const out: SourceValue[] = [];
   for (const row of sp.values) {
     let v = row[field];
-    if (v === undefined || seen.has(row.source)) continue;
-    seen.add(row.source);
+    const source = sourceOf(row);
+    if (v === undefined || seen.has(source)) continue;
+    seen.add(source);
     // S°(1 bar) = S°(P_ref) + R ln(P_ref / 1 bar) for an ideal gas; formation energies barely move (ignored)
     if (field === 'S' && sp.phase === 'g' && row.P_ref !== 1) v += R_J_PER_MOL_K * Math.log(row.P_ref);
     const stated = row[`u_${field}`];
-    out.push({ source: row.source, value: v, u: stated ?? DEFAULT_U[field], uStated: stated !== undefined, row });
+    out.push({ source, value: v, u: stated ?? DEFAULT_U[field], uStated: stated !== undefined, row });
   }
   return out;
 }

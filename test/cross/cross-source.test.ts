@@ -99,6 +99,18 @@ describe('cross-source: one odd source', () => {
   });
 });
 
+describe('cross-source: tables merged from several files without a source column', () => {
+  it('takes each file for a source and names the odd file', async () => {
+    // NH3(g) ΔfH° from CODATA (−45.94), JANAF (−45.898), NBS (−46.11); a fourth file planted 10 kJ/mol off
+    const files = [-45.94, -45.898, -46.11, -35.94].map((v) => tempFile(`species,phase,dHf\nNH3,g,${v}\n`));
+    const report = await check(normalizeOptions({ tables: files }), { version: 't', generatedAt: '' });
+    const f = report.findings.filter((x) => x.rule === 'cross-source');
+    expect(f).toHaveLength(1);
+    expect(f[0]!.location.file).toBe(report.provenance.inputs[3]!.path);
+    expect(f[0]!.messageId).toBe('odd');
+  });
+});
+
 describe('cross-source statistics', () => {
   const u = DEFAULT_U.dHf;
   it('does not explode when most values are identical (MAD = 0): the scale has a floor', () => {
