@@ -17,6 +17,7 @@ import { writeAtomic } from '../../reports/write.js';
 import { check } from '../check.js';
 import { loadReference } from '../chemistry/reference.js';
 import { withDatasetFindings } from '../diff/index.js';
+import { sourceOf } from '../rules/cross-source.js';
 import { loadSpecies } from '../equilibrium/species.js';
 import { InputError } from '../errors.js';
 import { ingestTable } from '../ingest/table.js';
@@ -71,7 +72,7 @@ export interface LeftOut {
  */
 export function leftOut(findings: readonly Finding[], species: readonly Species[], dropOn: DropOn): LeftOut {
   const byRow = new Map<string, { sp: Species; source: string }>();
-  for (const sp of species) for (const v of sp.values) byRow.set(rowKey(v.location.file, v.location.line), { sp, source: v.source });
+  for (const sp of species) for (const v of sp.values) byRow.set(rowKey(v.location.file, v.location.line), { sp, source: sourceOf(v) });
   const out: LeftOut = { species: new Set(), sources: new Set(), rows: new Set() };
   for (const f of findings) {
     const at = rowKey(f.location.file, f.location.line);
@@ -85,7 +86,7 @@ export function leftOut(findings: readonly Finding[], species: readonly Species[
       continue;
     }
     const row = byRow.get(at);
-    if (row && row.sp.name === f.species && row.sp.phase === f.phase && (f.rule === 'cross-source' || row.source !== row.sp.values[0]!.source)) {
+    if (row && row.sp.name === f.species && row.sp.phase === f.phase && (f.rule === 'cross-source' || row.source !== sourceOf(row.sp.values[0]!))) {
       out.sources.add(sourceKey(f.species, f.phase, row.source));
     } else out.species.add(`${f.species}|${f.phase}`);
   }
@@ -176,7 +177,7 @@ export async function exportTables(options: OptionsNormalized, opts: ExportOptio
         (row) => {
           const key = `${row.species}|${row.phase}`;
           const loc = row.values.location;
-          if (drop.species.has(key) || drop.sources.has(sourceKey(row.species, row.phase, row.values.source)) || drop.rows.has(rowKey(loc.file, loc.line))) {
+          if (drop.species.has(key) || drop.sources.has(sourceKey(row.species, row.phase, sourceOf(row.values))) || drop.rows.has(rowKey(loc.file, loc.line))) {
             rowsLeftOut++;
             if (drop.species.has(key)) speciesLeftOut.add(key);
             return;
