@@ -114,7 +114,7 @@ export function registerLnk(program: Command): void {
     .argument('[tables...]', 'CSV, TSV, JSON or NDJSON tables (or list them in the manifest)')
     .option('-m, --manifest <file>', 'dataset manifest (YAML or JSON): tables, units, use window, reactions file')
     .option('-r, --reactions <file>', 'reactions CSV: id, equation, and T (space-separated) or Tmin and Tmax')
-    .option('-e, --equation <equation>', 'a reaction given directly, e.g. "CO(g) + H2O(g) = CO2(g) + H2(g)" (repeatable)', (v: string, prev: string[]) => [...prev, v], [] as string[])
+    .option('-e, --equation <equation>', 'a reaction given directly, e.g. "CO(g) + H2O(g) = CO2(g) + H2(g)" (repeatable)', (v: string, prev: string[] | undefined) => [...(prev ?? []), v])
     .option('-t, --temperatures <list>', 'temperatures in K for every reaction, e.g. "298.15 500 1000"')
     .option('--tmin <K>', 'lower end of a window for every reaction (with --tmax): its ends and a grid inside')
     .option('--tmax <K>', 'upper end of that window')
