@@ -19,6 +19,11 @@ function sameCp(a: CpSpec, b: CpSpec): boolean {
   return a.model === b.model && same(a.Tmin, b.Tmin) && same(a.Tmax, b.Tmax) && a.coeffs.length === b.coeffs.length && a.coeffs.every((c, i) => same(c, b.coeffs[i]));
 }
 
+/** Rows without a source text are attributed to their file, so files merged into one run stay apart (as cross-source reads them). */
+function sameSource(a: RowValues, b: RowValues): boolean {
+  return a.source === b.source && (a.source !== '' || a.location.file === b.location.file);
+}
+
 function hasValues(v: RowValues): boolean {
   return v.dHf !== undefined || v.dGf !== undefined || v.S !== undefined;
 }
@@ -61,7 +66,7 @@ export class SpeciesStore {
       findings.push(makeFinding(conflictingValues, 'formula', { formula: row.formulaText, first: sp.formulaText, firstLine: sp.location.line }, { ...v.location, column: row.columns.formula ?? row.columns.species, field: 'formula' }, ids));
     }
     // exact repeat of an earlier row: same values from the same source, same Cp range (or none)
-    const twin = sp.values.find((e) => e.source === v.source && FIELDS.every((f) => same(e[f], v[f])));
+    const twin = sp.values.find((e) => sameSource(e, v) && FIELDS.every((f) => same(e[f], v[f])));
     const cpTwin = row.cp ? sp.cp.find((c) => sameCp(c, row.cp!)) : undefined;
     if ((hasValues(v) ? twin : true) && (row.cp ? cpTwin : !hasValues(v) || twin) && (twin || cpTwin)) {
       const first = (cpTwin ?? twin)!.location;
@@ -72,7 +77,7 @@ export class SpeciesStore {
     if (!hasValues(v) || twin) return findings;
     // the same source giving another number for the same field is a conflict; other sources are compared across records
     for (const e of sp.values) {
-      if (e.source !== v.source) continue;
+      if (!sameSource(e, v)) continue;
       for (const f of FIELDS) {
         const a = e[f];
         const b = v[f];
