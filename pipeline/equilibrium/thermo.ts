@@ -8,9 +8,9 @@
 //   ΔfG° and S°, no ΔfH°     -> ΔfH° = ΔfG° + 298.15·(S° − Σν·S°(elements)) ('GS')
 // An element in its reference state with ΔfH° (or ΔfG°) left blank takes 0, its value by definition.
 import { elementEntropySum, isReferenceState } from '../chemistry/reference.js';
-import { buildCurve, buildSegment, CpSpecError } from '../cp/index.js';
+import { speciesCp } from '../cp/curve-cache.js';
 import { T_REF_K } from '../cp/constants.js';
-import type { CpCurve, CpSegment, ReferenceData, Species } from '../types.js';
+import type { CpCurve, ReferenceData, Species } from '../types.js';
 
 export type ValueRoute = 'HS' | 'HG' | 'GS';
 
@@ -43,25 +43,12 @@ export function speciesLabel(sp: Species): string {
   return m && m[1]!.split(/[,\s]+/).includes(sp.phase) ? sp.name : `${sp.name}(${sp.phase})`;
 }
 
-const curveCache = new WeakMap<Species, CpCurve | null>();
-
-/** The species' Cp ranges joined into one curve (built once per Species object), or undefined if it has none usable. */
+/**
+ * The species' Cp ranges joined into one curve, or undefined if it has none usable. Shared with the Cp
+ * rules through pipeline/cp/curve-cache.ts, so each species' curve is built once per run.
+ */
 export function curveOf(sp: Species): CpCurve | undefined {
-  const hit = curveCache.get(sp);
-  if (hit !== undefined) return hit ?? undefined;
-  let curve: CpCurve | null = null;
-  const segs: CpSegment[] = [];
-  for (const spec of sp.cp) {
-    try {
-      segs.push(buildSegment(spec));
-    } catch (e) {
-      // a row whose Cp does not fit its model is the bad-cp-spec rule's finding; the others still count
-      if (!(e instanceof CpSpecError)) throw e;
-    }
-  }
-  if (segs.length > 0) curve = buildCurve(segs);
-  curveCache.set(sp, curve);
-  return curve ?? undefined;
+  return speciesCp(sp)?.curve;
 }
 
 /** Builds the thermo record, or says why it cannot be (which values are missing). */
