@@ -86,7 +86,7 @@ async function runLnk(tables: string[], flags: LnkFlags): Promise<number> {
   const reference = loadReference();
   const loaded = await loadSpecies(options);
   const window: UseWindow = options.useWindow;
-  const eq = runEquilibrium(specs, loaded.species, reference, window);
+  const eq = runEquilibrium(specs, loaded.species, reference, window, { cpMissingOnPoints: true });
   findings.push(...eq.findings);
 
   // the data these reactions use, checked by the species rules (the full check is `thermovet check`)

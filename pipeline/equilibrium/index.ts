@@ -25,14 +25,24 @@ export interface EquilibriumOutcome {
   findings: Finding[];
 }
 
-/** Resolves, balances and computes every reaction at its temperatures (its own, else the use window's). */
-export function runEquilibrium(specs: readonly ReactionSpec[], species: readonly Species[] | SpeciesIndex, reference: ReferenceData, window: UseWindow = {}): EquilibriumOutcome {
+/**
+ * Resolves, balances and computes every reaction at its temperatures (its own, else the use window's).
+ * opts.cpMissingOnPoints: list, on each point, the species without Cp that forced ΔrCp = 0 (off by
+ * default: schemas/report.schema.json does not allow it on points; schemas/reactions.schema.json does).
+ */
+export function runEquilibrium(
+  specs: readonly ReactionSpec[],
+  species: readonly Species[] | SpeciesIndex,
+  reference: ReferenceData,
+  window: UseWindow = {},
+  opts: { cpMissingOnPoints?: boolean } = {},
+): EquilibriumOutcome {
   const { resolved, results, findings } = resolveReactions(specs, species, reference, window);
   const byId = new Map(resolved.map((r) => [r.id, r]));
   for (let i = 0; i < results.length; i++) {
     const r = byId.get(results[i]!.id);
     if (!r || r.line !== results[i]!.line || r.file !== results[i]!.file) continue;
-    results[i] = reactionResult(r);
+    results[i] = reactionResult(r, opts);
     findings.push(...reactionDataFindings(r));
   }
   return { results, resolved, findings };

@@ -52,7 +52,7 @@ export function cpMissing(r: ResolvedReaction): string[] {
  * stated uncertainties, and the species whose Cp is extrapolated at each T (kelvin outside every
  * fitted range, and the Cp the correlation gives there).
  */
-export function computeReaction(r: ResolvedReaction, temps: readonly number[] = r.temps): EquilibriumPoint[] {
+export function computeReaction(r: ResolvedReaction, temps: readonly number[] = r.temps, opts: { cpMissingOnPoints?: boolean } = { cpMissingOnPoints: true }): EquilibriumPoint[] {
   const R = R_J_PER_MOL_K;
   const at298 = reactionAt298(r);
   const missing = cpMissing(r);
@@ -89,15 +89,19 @@ export function computeReaction(r: ResolvedReaction, temps: readonly number[] = 
     };
     const u = stated ? uncertaintyAt(r, T) : undefined;
     if (u) p.u_lnK = u.u;
-    if (missing.length) p.cpMissing = missing;
+    if (missing.length && opts.cpMissingOnPoints) p.cpMissing = missing;
     points.push(p);
   }
   return points;
 }
 
-/** The report entry of a computed reaction: its points and the uncertainty ranking. */
-export function reactionResult(r: ResolvedReaction): ReactionResult {
-  const result: ReactionResult = { id: r.id, equation: r.equation, file: r.file, line: r.line, balanced: true, points: computeReaction(r) };
+/**
+ * The report entry of a computed reaction: its points and the uncertainty ranking. `cpMissing` is put
+ * on the points only when asked (the report schema's points do not carry it yet; the reaction-data
+ * cp-missing finding says the same at the reaction's line).
+ */
+export function reactionResult(r: ResolvedReaction, opts: { cpMissingOnPoints?: boolean } = {}): ReactionResult {
+  const result: ReactionResult = { id: r.id, equation: r.equation, file: r.file, line: r.line, balanced: true, points: computeReaction(r, r.temps, opts) };
   const ranking = uncertaintyRanking(r, r.temps);
   if (ranking) result.uncertaintyRanking = ranking;
   return result;

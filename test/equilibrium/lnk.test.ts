@@ -136,7 +136,10 @@ describe('extrapolation is flagged where the Cp range ends', () => {
 describe('a species without any Cp', () => {
   test('the reaction falls back to ΔrCp = 0: ln K is the shortcut, the species is listed, a warning says so', () => {
     const t = publishedSpecies().map((s) => (s.name === 'NH3' ? { ...s, cp: [] } : s));
-    const out = runEquilibrium([reactionFromEquation('nh3', 'N2(g) + 3 H2(g) = 2 NH3(g)', where, { temps: [298.15, 700] })], t, REFERENCE);
+    const spec = reactionFromEquation('nh3', 'N2(g) + 3 H2(g) = 2 NH3(g)', where, { temps: [298.15, 700] });
+    const out = runEquilibrium([spec], t, REFERENCE, {}, { cpMissingOnPoints: true });
+    // by default the points stay as the report schema has them; the finding carries the news
+    expect(runEquilibrium([spec], t, REFERENCE).results[0]!.points.every((p) => !('cpMissing' in p))).toBe(true);
     expect(out.findings.map((f) => [f.rule, f.messageId, f.severity, f.species])).toEqual([['reaction-data', 'cp-missing', 'warning', 'NH3']]);
     for (const p of out.results[0]!.points as { lnK: number; lnKShortcut: number; cpMissing?: string[] }[]) {
       expect(p.lnK).toBeCloseTo(p.lnKShortcut, 12);
