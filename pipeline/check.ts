@@ -8,7 +8,7 @@ import { SpeciesStore } from './records.js';
 import { speciesSummary } from './summary.js';
 import { DATASET_RULES, RULES, SPECIES_RULES } from './rules/index.js';
 import { impactOfFindings, loadReactions, runEquilibrium } from './equilibrium/index.js';
-import type { CheckContext, Finding, OptionsNormalized, ReactionResult, Report, Summary } from './types.js';
+import { CHART_SPECIES_LIMIT, type CheckContext, type Finding, type OptionsNormalized, type ReactionResult, type Report, type Summary } from './types.js';
 
 export interface RunInfo {
   version: string;
@@ -74,22 +74,26 @@ export async function check(options: OptionsNormalized, run: RunInfo): Promise<R
   for (const rule of DATASET_RULES) for (const f of rule.checkAll(species, ctx)) findings.push(f);
   // the equilibrium stage: ln K for the reactions of interest, then what each finding costs in ln K
   let reactions: ReactionResult[] | undefined;
+  const charted = new Set<string>(); // species whose Cp curve the report samples for charts
   if (options.reactionsFile) {
     const loaded = loadReactions(options.reactionsFile);
-    const eq = runEquilibrium(loaded.reactions, species, reference, options.useWindow);
+    const eq = runEquilibrium(loaded.reactions, species, reference, options.useWindow, { cpMissingOnPoints: true });
     for (const f of loaded.findings) findings.push(f);
     for (const f of eq.findings) findings.push(f);
     impactOfFindings(findings, eq.resolved);
     reactions = eq.results;
+    for (const r of eq.resolved) for (const t of r.terms) charted.add(t.thermo.species.key);
   }
+  for (const f of findings) if (f.rule.startsWith('cp-') && f.species !== undefined) charted.add(`${f.species}|${f.phase}`);
   findings.sort(compareFindings);
+  const chartKeys = new Set([...charted].slice(0, CHART_SPECIES_LIMIT)); // reaction species first, then Cp findings
   const inputs = await Promise.all([...options.tables.map((t) => t.path), ...(options.reactionsFile ? [options.reactionsFile] : [])].map((p) => fileDigest(p)));
   return {
     tool: { name: 'thermovet', version: run.version },
     dataset: { name: options.name, useWindow: options.useWindow },
     summary: summarize(rows, accepted, rejected, species.length, findings),
     findings,
-    species: species.map((sp) => speciesSummary(sp, reference)),
+    species: species.map((sp) => speciesSummary(sp, reference, options.useWindow, chartKeys.has(sp.key))),
     ...(reactions ? { reactions } : {}),
     provenance: {
       generatedAt: run.generatedAt,

@@ -242,6 +242,8 @@ export interface ReactionPoint {
   u_lnK?: number; // standard uncertainty propagated from stated uncertainties
   /** species whose Cp is extrapolated at T, by how many kelvin, and the Cp the correlation gives there */
   extrapolated: { species: string; outsideK: number; cp: number }[];
+  /** species with no Cp correlation at all: the reaction is then computed with ΔrCp = 0 */
+  cpMissing?: string[];
 }
 
 export interface ReactionResult {
