@@ -36,7 +36,7 @@ export function pathToUri(path: string): string {
 /** The rule's doc page, shipped with the tool, as the help CI systems show beside an annotation. */
 function docPage(rule: Rule): string | undefined {
   try {
-    return readFileSync(join(packageRoot(), rule.docs), 'utf8');
+    return readFileSync(join(packageRoot(), rule.docs.replace(/#.*$/, '')), 'utf8');
   } catch {
     return undefined;
   }

@@ -44,7 +44,8 @@ async function runCheck(tables: string[], flags: CheckFlags): Promise<number> {
     report = await check(options, { version, generatedAt: stamp, onProgress: (rows) => progress.update('reading rows', rows, Math.max(expected, rows + 1)) });
     if (waivers && options.waiversFile) {
       report = waiveReport(report, waivers, stamp.slice(0, 10)); // the day of the run: the clock's, or the fixed one of a deterministic run
-      report = { ...report, provenance: { ...report.provenance, inputs: [...report.provenance.inputs, await fileDigest(options.waiversFile)] } };
+      const inputs = [...report.provenance.inputs, await fileDigest(options.waiversFile)];
+      report = { ...report, provenance: { ...report.provenance, inputs, options: { ...report.provenance.options, waivers: options.waiversFile } } };
     }
     if (flags.sarif) writeAtomic(flags.sarif, renderSarif(report, { columns: await fieldColumns(report) }));
     if (flags.html) writeAtomic(flags.html, await renderHtml(report, { onChart: (done, total) => progress.update('drawing charts', done, total) }));

@@ -1,6 +1,6 @@
 // SARIF 2.1.0: validates against the vendored schema (schemas/README.md names its source), carries rules,
 // levels, locations down to the cell, waivers as suppressions; JSON and SARIF are byte-identical on reruns.
-import { mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
+import { existsSync, mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { Ajv2020 } from 'ajv/dist/2020.js';
@@ -36,10 +36,14 @@ describe('renderSarif', () => {
     const run = log.runs[0];
     expect(run.tool.driver.name).toBe('thermovet');
     expect(run.tool.driver.rules.map((r: { id: string }) => r.id)).toEqual(RULES.map((r) => r.id));
-    for (const r of run.tool.driver.rules) {
+    run.tool.driver.rules.forEach((r: any, i: number) => {
       expect(r.shortDescription.text.length).toBeGreaterThan(10);
-      expect(r.help.text).toContain('docs/rules/');
-    }
+      expect(r.help.text).toContain(RULES[i]!.docs);
+      // the rule's doc page itself, when the page exists in this checkout
+      if (existsSync(RULES[i]!.docs.replace(/#.*$/, ''))) expect(r.help.markdown).toMatch(/^#/);
+      else expect(r.help.markdown).toBeUndefined();
+    });
+    expect(run.tool.driver.rules.find((r: any) => r.id === 'waiver-expired').help.markdown).toMatch(/^# waiver-expired/);
     const gh = run.results.find((r: any) => r.properties.species === 'CO2');
     expect(gh).toMatchObject({ ruleId: 'gibbs-helmholtz', level: 'error', locations: [{ physicalLocation: { artifactLocation: { uri: 'datasets/fixture/gases.csv' }, region: { startLine: 4 } } }] });
     expect(run.tool.driver.rules[gh.ruleIndex].id).toBe('gibbs-helmholtz');

@@ -155,6 +155,7 @@ describe('thermovet check --waivers (built CLI, invented demo)', () => {
     // the duplicate warnings no longer count; the unmatched-waiver warning does
     expect(b.summary.warnings).toBe(a.summary.warnings - dup.length + 1);
     expect(b.provenance.inputs.map((i: { path: string }) => i.path)).toContain(w);
+    expect(b.provenance.options.waivers).toBe(w);
   });
 
   it('expired: with SOURCE_DATE_EPOCH after the expiry the run fails on the expired waiver', () => {
