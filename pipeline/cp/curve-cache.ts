@@ -31,8 +31,8 @@ export interface CpScan {
   max: CpPoint;
 }
 
-const LINEAR_POINTS = 96;
-const LOG_POINTS = 64;
+const LINEAR_POINTS = 64;
+const LOG_POINTS = 48;
 const GOLDEN_ITERATIONS = 60; // shrinks a bracket by 0.618^60 ≈ 3e-13
 
 const bySpecies = new WeakMap<Species, SpeciesCp | null>();
@@ -76,18 +76,34 @@ export function scanOf(spec: CpSpec): CpScan {
 
 /** Sample grid over [a, b] (0 < a < b): linear ∪ logarithmic ∪ extra points inside, ascending, unique. */
 export function sampleGrid(a: number, b: number, extra: readonly number[] = []): number[] {
-  const pts: number[] = [];
-  for (let i = 0; i <= LINEAR_POINTS; i++) pts.push(a + ((b - a) * i) / LINEAR_POINTS);
+  const lin = new Array<number>(LINEAR_POINTS + 1);
+  for (let i = 0; i <= LINEAR_POINTS; i++) lin[i] = a + ((b - a) * i) / LINEAR_POINTS;
+  let log: number[] = [];
   if (a > 0) {
-    const r = Math.log(b / a);
-    for (let i = 1; i < LOG_POINTS; i++) pts.push(a * Math.exp((r * i) / LOG_POINTS));
+    const step = Math.pow(b / a, 1 / LOG_POINTS);
+    log = new Array<number>(LOG_POINTS - 1);
+    let t = a;
+    for (let i = 0; i < LOG_POINTS - 1; i++) log[i] = t *= step;
   }
-  for (const t of extra) if (t > a && t < b) pts.push(t);
-  pts.sort((x, y) => x - y);
+  let merged = merge(lin, log);
+  if (extra.length) merged = merge(merged, extra.filter((t) => t > a && t < b).sort((x, y) => x - y));
+  merged[0] = a;
+  merged[merged.length - 1] = b;
+  return merged;
+}
+
+/** Merge two ascending lists, dropping repeats and anything outside the first list's span. */
+function merge(x: readonly number[], y: readonly number[]): number[] {
   const out: number[] = [];
-  for (const t of pts) if (out.length === 0 || t > out[out.length - 1]) out.push(t);
-  out[0] = a;
-  out[out.length - 1] = b;
+  let i = 0;
+  let j = 0;
+  const lo = x[0];
+  const hi = x[x.length - 1];
+  while (i < x.length || j < y.length) {
+    const v = j >= y.length || (i < x.length && x[i] <= y[j]) ? x[i++] : y[j++];
+    if (v < lo || v > hi) continue;
+    if (out.length === 0 || v > out[out.length - 1]) out.push(v);
+  }
   return out;
 }
 
