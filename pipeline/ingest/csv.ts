@@ -1,5 +1,5 @@
 // CSV and TSV through csv-parse, streaming, no per-cell cast. Every record keeps its physical start line.
-import { closeSync, createReadStream, openSync, readSync } from 'node:fs';
+import { createReadStream } from 'node:fs';
 import { parse, type CsvError } from 'csv-parse';
 import { InputError } from '../errors.js';
 import { LIMITS, type TableSink } from './events.js';
@@ -8,35 +8,42 @@ import { sniff } from './sniff.js';
 /**
  * Streams the table at `path` into `sink`. Lines are counted here rather than taken from the parser:
  * a record starts on the line after the previous one ended, and spans one line more than the number of
- * line feeds inside its quoted fields. Blank lines and lines starting with `#` are skipped but counted.
+ * line feeds inside its quoted fields. Empty lines and lines starting with `#` (outside quotes) give no
+ * record; the parser counts them, and they are added in.
  */
 export async function readDelimited(path: string, delimiter: ',' | '\t', sink: TableSink): Promise<void> {
   sniff(path);
-  const preamble = preambleLines(path);
   const parser = parse({
-    // csv-parse takes the width of its first record as the expected one and builds an error object
-    // (stack trace, deep copy of the record) for every record of another width, even when relaxed; a
-    // comment line before the header would make that every row, so it starts at the header line
-    from_line: preamble + 1,
     delimiter,
     bom: true,
     relax_column_count: true, // ragged rows become row findings, not a failed file
     relax_quotes: true, // a stray quote inside a field stays in the field (and fails its number check)
     max_record_size: LIMITS.maxRecordChars,
+    // a comment is a line that starts with `#` outside quotes, read by the lexer: a quote inside it opens
+    // nothing (`# see,"note` must not swallow the rows after it), and a quoted "#1" cell is data
+    comment: '#',
+    comment_no_infix: true,
+    // csv-parse takes the width of its first record as the expected one and builds an error object
+    // (stack trace, deep copy of the record) for every record of another width, even when relaxed; so
+    // comment and empty lines must give no record at all (a blank line before the header would make
+    // every row such a record). Both are still lines: info counts them.
+    skip_empty_lines: true,
+    info: true,
   });
-  let nextLine = preamble + 1;
+  let consumed = 0; // lines taken by the records seen so far
   let headerSeen = false;
   let width = 0;
-  const onRecord = (record: string[]): void => {
-    const line = nextLine;
+  let nextLine = 1; // where the next record starts at the earliest, for errors raised by the parser
+  const onRecord = (record: string[], skipped: number): void => {
+    const line = 1 + consumed + skipped;
     let feeds = 0;
     for (let i = 0; i < record.length; i++) {
       const cell = record[i]!;
       if (cell.length > 0 && cell.indexOf('\n') !== -1) feeds += countFeeds(cell);
     }
-    nextLine += 1 + feeds;
+    consumed += 1 + feeds;
+    nextLine = 1 + consumed + skipped;
     if (record.length === 1 && record[0]!.trim() === '') return; // blank line
-    if (record[0]!.startsWith('#')) return; // comment line
     if (!headerSeen) {
       headerSeen = true;
       width = record.length;
@@ -69,9 +76,9 @@ export async function readDelimited(path: string, delimiter: ',' | '\t', sink: T
     };
     input.on('error', fail);
     parser.on('error', fail);
-    parser.on('data', (record: string[]) => {
+    parser.on('data', ({ record, info }: { record: string[]; info: { comment_lines: number; empty_lines: number } }) => {
       try {
-        onRecord(record);
+        onRecord(record, info.comment_lines + info.empty_lines);
       } catch (e) {
         fail(e);
       }
@@ -80,27 +87,6 @@ export async function readDelimited(path: string, delimiter: ',' | '\t', sink: T
     input.pipe(parser);
   });
   if (!headerSeen) throw new InputError('empty-file', 'the file has no header and no rows', { file: path, line: 1 });
-}
-
-/** How many whole lines at the top of the file are blank or `#` comments (looked for in the first 64 KiB). */
-function preambleLines(path: string): number {
-  const buf = Buffer.alloc(64 * 1024);
-  const fd = openSync(path, 'r');
-  let n: number;
-  try {
-    n = readSync(fd, buf, 0, buf.length, 0);
-  } finally {
-    closeSync(fd);
-  }
-  const lines = buf.subarray(0, n).toString('utf8').replace(/^\uFEFF/, '').split('\n');
-  let count = 0;
-  // the last piece may be cut off by the buffer's end: only lines followed by a line feed count
-  for (let i = 0; i < lines.length - 1; i++) {
-    const line = lines[i]!;
-    if (line.trim() !== '' && !line.startsWith('#')) break;
-    count++;
-  }
-  return count;
 }
 
 function countFeeds(s: string): number {
