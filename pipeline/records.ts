@@ -2,11 +2,15 @@
 import { makeFinding } from './rules/finding.js';
 import { rule as conflictingValues } from './rules/conflicting-values.js';
 import { rule as duplicateRow } from './rules/duplicate-row.js';
+import { rule as badCpSpec } from './rules/bad-cp-spec.js';
 import { formatFormula } from './chemistry/formula.js';
 import { toDeclared } from './units/convert.js';
 import type { CpSpec, Finding, RowValues, Species, SpeciesRow } from './types.js';
 
 const FIELDS = ['dHf', 'dGf', 'S'] as const;
+/** Published correlations use 1–10 ranges per species; past this many, further ranges are refused (each
+ *  with a finding), which keeps joining them cheap whatever a hostile or generated table holds. */
+export const MAX_CP_RANGES = 200;
 /** two values of one field from one source agree when within this relative difference (round-off of unit conversion) */
 const SAME_REL = 1e-9;
 
@@ -22,6 +26,20 @@ function sameCp(a: CpSpec, b: CpSpec): boolean {
 /** Rows without a source text are attributed to their file, so files merged into one run stay apart (as cross-source reads them). */
 function sameSource(a: RowValues, b: RowValues): boolean {
   return a.source === b.source && (a.source !== '' || a.location.file === b.location.file);
+}
+
+function sourceKey(v: RowValues): string {
+  return v.source !== '' ? `s:${v.source}` : `f:${v.location.file}`;
+}
+
+function rangeKey(c: CpSpec): string {
+  return `${c.model}|${c.Tmin}|${c.Tmax}`;
+}
+
+function push<T>(map: Map<string, T[]>, key: string, item: T): void {
+  const list = map.get(key);
+  if (list) list.push(item);
+  else map.set(key, [item]);
 }
 
 function hasValues(v: RowValues): boolean {
@@ -66,18 +84,23 @@ export class SpeciesStore {
       findings.push(makeFinding(conflictingValues, 'formula', { formula: row.formulaText, first: sp.formulaText, firstLine: sp.location.line }, { ...v.location, column: row.columns.formula ?? row.columns.species, field: 'formula' }, ids));
     }
     // exact repeat of an earlier row: same values from the same source, same Cp range (or none)
-    const twin = sp.values.find((e) => sameSource(e, v) && FIELDS.every((f) => same(e[f], v[f])));
-    const cpTwin = row.cp ? sp.cp.find((c) => sameCp(c, row.cp!)) : undefined;
+    const sameSourceRows = this.rowsOfSource(sp, v);
+    const twin = sameSourceRows.find((e) => FIELDS.every((f) => same(e[f], v[f])));
+    const cpTwin = row.cp ? this.cpOfRange(sp, row.cp).find((c) => sameCp(c, row.cp!)) : undefined;
     if ((hasValues(v) ? twin : true) && (row.cp ? cpTwin : !hasValues(v) || twin) && (twin || cpTwin)) {
       const first = (cpTwin ?? twin)!.location;
       findings.push(makeFinding(duplicateRow, 'repeat', { firstLine: first.line, firstFile: first.file, species: sp.name, phase: sp.phase }, v.location, ids));
       return findings;
     }
-    if (row.cp && !cpTwin) sp.cp.push(row.cp);
+    if (row.cp && !cpTwin) {
+      if (sp.cp.length < MAX_CP_RANGES) this.addCp(sp, row.cp);
+      else findings.push(makeFinding(badCpSpec, 'tooMany', { max: MAX_CP_RANGES, species: sp.name }, { ...v.location, column: row.columns.cp_Tmin, field: 'cp_Tmin' }, ids));
+    }
     if (!hasValues(v) || twin) return findings;
-    // the same source giving another number for the same field is a conflict; other sources are compared across records
-    for (const e of sp.values) {
-      if (!sameSource(e, v)) continue;
+    // the same source giving another number for the same field is a conflict with its first row;
+    // other sources are compared across records (rule cross-source)
+    const e = sameSourceRows[0];
+    if (e) {
       for (const f of FIELDS) {
         const a = e[f];
         const b = v[f];
@@ -87,9 +110,61 @@ export class SpeciesStore {
         }
       }
     }
-    sp.values.push(v);
+    this.addValues(sp, v);
     this.takeValues(sp, v);
     return findings;
+  }
+
+  // Lookups of earlier rows by source and by Cp range. Small lists are scanned; a species with many rows
+  // (a hostile or generated table repeating one species 10^5 times) gets an index, so folding stays linear.
+  private static readonly SCAN = 16;
+  private readonly valueIndex = new WeakMap<Species, Map<string, RowValues[]>>();
+  private readonly cpIndex = new WeakMap<Species, Map<string, CpSpec[]>>();
+
+  private rowsOfSource(sp: Species, v: RowValues): RowValues[] {
+    if (sp.values.length <= SpeciesStore.SCAN) return sp.values.filter((e) => sameSource(e, v));
+    return this.valueMap(sp).get(sourceKey(v)) ?? [];
+  }
+
+  private addValues(sp: Species, v: RowValues): void {
+    sp.values.push(v);
+    if (sp.values.length <= SpeciesStore.SCAN) return;
+    const map = this.valueMap(sp);
+    if (sp.values.length === SpeciesStore.SCAN + 1) return; // just built, v included
+    push(map, sourceKey(v), v);
+  }
+
+  private valueMap(sp: Species): Map<string, RowValues[]> {
+    let map = this.valueIndex.get(sp);
+    if (!map) {
+      map = new Map();
+      for (const e of sp.values) push(map, sourceKey(e), e);
+      this.valueIndex.set(sp, map);
+    }
+    return map;
+  }
+
+  private cpOfRange(sp: Species, c: CpSpec): CpSpec[] {
+    if (sp.cp.length <= SpeciesStore.SCAN) return sp.cp;
+    return this.cpMap(sp).get(rangeKey(c)) ?? [];
+  }
+
+  private addCp(sp: Species, c: CpSpec): void {
+    sp.cp.push(c);
+    if (sp.cp.length <= SpeciesStore.SCAN) return;
+    const map = this.cpMap(sp);
+    if (sp.cp.length === SpeciesStore.SCAN + 1) return;
+    push(map, rangeKey(c), c);
+  }
+
+  private cpMap(sp: Species): Map<string, CpSpec[]> {
+    let map = this.cpIndex.get(sp);
+    if (!map) {
+      map = new Map();
+      for (const c of sp.cp) push(map, rangeKey(c), c);
+      this.cpIndex.set(sp, map);
+    }
+    return map;
   }
 
   private takeValues(sp: Species, v: RowValues): void {

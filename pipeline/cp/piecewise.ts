@@ -98,8 +98,13 @@ export function buildCurve(segments: CpSegment[]): CpCurve {
     cur.offS = next.offS + next.seg.intCpOverT(b) - cur.seg.intCpOverT(b);
   }
 
-  const Tmin = Math.min(...segs.map((s) => s.Tmin));
-  const Tmax = Math.max(...segs.map((s) => s.Tmax));
+  // a loop, not Math.min(...): a hostile table may give one species 10^5 ranges, too many for spread arguments
+  let Tmin = Infinity;
+  let Tmax = -Infinity;
+  for (const s of segs) {
+    if (s.Tmin < Tmin) Tmin = s.Tmin;
+    if (s.Tmax > Tmax) Tmax = s.Tmax;
+  }
 
   return {
     segments: segs,

@@ -12,6 +12,7 @@ export const rule: Rule = {
     exponents: 'poly has {coeffs} coefficients but {exponents} exponents',
     tableTemps: 'table has {coeffs} Cp values but {temps} temperatures (need at least 2, ascending)',
     range: 'validity range cp_Tmin = {Tmin} K is not below cp_Tmax = {Tmax} K',
+    tooMany: '{species} already has {max} Cp ranges; this range is not used (no published correlation needs that many)',
     unit: 'cp_unit "{text}" is not one of J/(mol K), cal/(mol K), R',
   },
 };

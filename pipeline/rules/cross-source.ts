@@ -87,6 +87,19 @@ export type CrossVerdict =
   | { kind: 'spread'; median: number; farthest: number; tolerance: number };
 
 const combined = (a: number, b: number): number => COVERAGE_K * Math.hypot(a, b);
+/** max − min without spreading a huge array into arguments */
+function rangeOf(xs: readonly number[]): number {
+  let lo = Infinity;
+  let hi = -Infinity;
+  for (const x of xs) {
+    if (x < lo) lo = x;
+    if (x > hi) hi = x;
+  }
+  return hi - lo;
+}
+
+/** up to this many sources every pair is compared; beyond it the spread is judged in one pass */
+const PAIRWISE_MAX = 64;
 
 /**
  * The statistics, apart from any species: `values` one per source (SI), `floor` the smallest scale
@@ -102,29 +115,38 @@ export function judgeSources(values: readonly { value: number; u: number }[], fl
   }
   const xs = values.map((v) => v.value);
   const median = medianOf(xs);
+  let uMed: number | undefined;
+  const uMedian = (): number => (uMed ??= medianOf(values.map((v) => v.u)));
   const scale = robustScale(xs, floor);
   const odd: { index: number; z: number; tolerance: number; medianOthers: number }[] = [];
   values.forEach((v, index) => {
     const z = (v.value - median) / scale;
     if (Math.abs(z) <= ODD_Z) return;
-    const others = values.filter((_, j) => j !== index);
-    const medianOthers = medianOf(others.map((o) => o.value));
-    const tolerance = combined(v.u, medianOf(others.map((o) => o.u)));
+    // with many sources, leaving one out does not move the medians: use the whole set's, O(1) per value
+    const others = n <= PAIRWISE_MAX ? values.filter((_, j) => j !== index) : undefined;
+    const medianOthers = others ? medianOf(others.map((o) => o.value)) : median;
+    const tolerance = combined(v.u, others ? medianOf(others.map((o) => o.u)) : uMedian());
     if (Math.abs(v.value - medianOthers) > tolerance) odd.push({ index, z, tolerance, medianOthers });
   });
   // an odd one out needs a majority that agrees: otherwise the sources simply scatter
   if (odd.length > 0 && odd.length < n / 2) return { kind: 'odd', median, scale, odd };
   let worst = 0;
   let tolerance = 0;
-  for (let i = 0; i < n; i++) {
-    for (let j = i + 1; j < n; j++) {
-      const tol = combined(values[i]!.u, values[j]!.u);
-      const excess = Math.abs(values[i]!.value - values[j]!.value) / tol;
-      if (excess > worst) {
-        worst = excess;
-        tolerance = tol;
+  if (n <= PAIRWISE_MAX) {
+    for (let i = 0; i < n; i++) {
+      for (let j = i + 1; j < n; j++) {
+        const tol = combined(values[i]!.u, values[j]!.u);
+        const excess = Math.abs(values[i]!.value - values[j]!.value) / tol;
+        if (excess > worst) {
+          worst = excess;
+          tolerance = tol;
+        }
       }
     }
+  } else {
+    // many sources (a generated or hostile table): the full spread against the median uncertainty, O(n)
+    tolerance = combined(uMedian(), uMedian());
+    worst = rangeOf(xs) / tolerance;
   }
   if (worst <= 1) return { kind: 'agree' };
   let farthest = 0;
@@ -160,7 +182,7 @@ rule.check = (sp: Species): Finding[] => {
     const declared = (si: number): number => round(toDeclared(si, field, unit));
     const shown = (si: number): number => round(si / disp.per);
     const xs = vals.map((v) => v.value);
-    const spread = shown(Math.max(...xs) - Math.min(...xs));
+    const spread = shown(rangeOf(xs));
     const ids = { species: sp.name, phase: sp.phase };
     const common = { field, unit, spreadUnit: disp.unit, spread, sources: vals.length };
     if (verdict.kind === 'two') {

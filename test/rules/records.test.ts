@@ -27,3 +27,24 @@ describe('folding rows into species', () => {
     expect(r.findings.map((f) => [f.rule, f.location.line])).toEqual([['duplicate-row', 3]]);
   });
 });
+
+describe('one species repeated very many times (generated or hostile tables)', () => {
+  it('5000 sources agreeing give no finding; one odd among them is found on its line', async () => {
+    const rows = Array.from({ length: 5000 }, (_, i) => `CO2,g,${i === 4321 ? -390.0 : -393.522},-394.389,213.795,src${i}`);
+    const r = await run(tempFile('species,phase,dHf,dGf,S,source\n' + rows.join('\n') + '\n'));
+    expect(r.summary).toMatchObject({ rows: 5000, accepted: 5000, species: 1 });
+    // the odd ΔfH° also breaks Gibbs–Helmholtz on its own row
+    expect(r.findings.map((f) => [f.rule, f.location.line])).toEqual([['cross-source', 4323], ['gibbs-helmholtz', 4323]]);
+  });
+
+  it('refuses Cp ranges past the per-species limit, each with a finding, and keeps the rows', async () => {
+    // CO(g) Shomate fit, 298–1300 K, NIST Chemistry WebBook (from memory), cut into 1 K ranges
+    const coeffs = '25.56759 6.09613 4.054656 -2.671301 0.131021 -118.0089 227.3665 -110.5271';
+    const rows = Array.from({ length: 250 }, (_, i) => `CO,g,-110.53,-137.163,197.66,shomate,${coeffs},${298 + i},${299 + i}`);
+    const r = await run(tempFile('species,phase,dHf,dGf,S,cp_model,cp_coeffs,cp_Tmin,cp_Tmax\n' + rows.join('\n') + '\n'));
+    expect(r.summary).toMatchObject({ rows: 250, accepted: 250 });
+    const refused = r.findings.filter((f) => f.rule === 'bad-cp-spec' && f.messageId === 'tooMany');
+    expect(refused).toHaveLength(50);
+    expect(refused[0]!.location.line).toBe(202);
+  });
+});
