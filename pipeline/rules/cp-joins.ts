@@ -72,7 +72,7 @@ rule.check = (sp: Species): Finding[] => {
     findings.push(makeFinding(rule, messageId, params, cpLocation(sp, lower, fields[0]), { ...ids, severity }));
   };
 
-  // walk the ranges in Tmin order; `reach` is the highest Tmax so far and the range that has it
+  // walk the ranges in Tmin order; `prev` is the range reaching highest so far
   let prev = cp.specs[0];
   for (let i = 1; i < cp.specs.length; i++) {
     const next = cp.specs[i];
