@@ -38,9 +38,9 @@ export const rule: Rule = {
     enthalpy: 'the {model} constants imply ΔfH°(298.15 K) = {implied} kJ/mol; the row gives dHf = {row} kJ/mol (difference {diff} kJ/mol, tolerance {tol}){extrapolated}',
     entropy: 'the {model} constants imply S°(298.15 K) = {implied} J/(mol K); the row gives S = {row} J/(mol K) (difference {diff} J/(mol K), tolerance {tol}){extrapolated}',
     enthalpyDiagnosed:
-      'the {model} constants imply ΔfH°(298.15 K) = {implied} kJ/mol; the row gives dHf = {row} kJ/mol (difference {diff} kJ/mol); {blamed} look like {words}: corrected {corrected} {unit} leaves {residualAfter} kJ/mol{extrapolated}',
+      'the {model} constants imply ΔfH°(298.15 K) = {implied} kJ/mol; the row gives dHf = {row} kJ/mol (difference {diff} kJ/mol); it looks like {words} in {blamed}: corrected {corrected} {unit} leaves {residualAfter} kJ/mol{extrapolated}',
     entropyDiagnosed:
-      'the {model} constants imply S°(298.15 K) = {implied} J/(mol K); the row gives S = {row} J/(mol K) (difference {diff} J/(mol K)); {blamed} look like {words}: corrected {corrected} {unit} leaves {residualAfter} J/(mol K){extrapolated}',
+      'the {model} constants imply S°(298.15 K) = {implied} J/(mol K); the row gives S = {row} J/(mol K) (difference {diff} J/(mol K)); it looks like {words} in {blamed}: corrected {corrected} {unit} leaves {residualAfter} J/(mol K){extrapolated}',
     shomateH: 'the Shomate H coefficient ({value} kJ/mol) is ΔfH°298 by definition; the row gives dHf = {row} kJ/mol (difference {diff} kJ/mol, tolerance {tol})',
     shomateHDiagnosed:
       'the Shomate H coefficient ({value} kJ/mol) is ΔfH°298 by definition; the row gives dHf = {row} kJ/mol; the coefficient looks like {words}: {corrected} kJ/mol leaves {residualAfter} kJ/mol',
