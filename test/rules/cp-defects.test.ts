@@ -72,10 +72,10 @@ describe('every injected defect on its line, with the right rule; no error on th
   });
 });
 
-describe('speed', () => {
-  // 2·10^4 two-range species through every species rule; on an idle machine this takes a few seconds
-  // (the Cp rules share one curve and one scan per range), the bound leaves room for a loaded CI runner
-  it('2·10^4 two-range species through every species rule in under 60 s', () => {
+describe('volume', () => {
+  // 2·10^4 two-range species through every species rule (the Cp rules share one curve and one scan per
+  // range). Speed is timed by npm run bench, not asserted here; this checks the functional result at volume.
+  it('2·10^4 two-range species through every species rule: nothing from the Cp rules', () => {
     const reference = loadReference();
     const options = normalizeOptions({ tables: ['x.csv'] });
     const ctx = { options: { ...options, useWindow: { Tmin: 300, Tmax: 1500 } }, reference };
@@ -85,11 +85,8 @@ describe('speed', () => {
       const cp: CpSpec[] = NASA7.CO.map((r, j) => ({ model: 'nasa7', coeffs: r.coeffs.map((c) => c * (1 + 1e-9 * i)), unit: 'R', unitFactor: 1, Tmin: r.Tmin!, Tmax: r.Tmax!, location: { file: 'big.csv', line: 2 * i + 2 + j } }));
       list.push({ key: `CO${i}|g`, name: `CO${i}`, formulaText: 'CO', formula, phase: 'g', dHf: -110530, S: 197.66, u: {}, P_ref: 1, values: [], cp, location: cp[0].location, columns: {}, units: {} });
     }
-    const t0 = performance.now();
     let n = 0;
     for (const sp of list) for (const rule of SPECIES_RULES) n += rule.check!(sp, ctx).length;
-    const seconds = (performance.now() - t0) / 1000;
     expect(n).toBe(20_000); // one incomplete-species info each (no ΔfG°), nothing from the Cp rules
-    expect(seconds).toBeLessThan(60);
   }, 120_000);
 });
