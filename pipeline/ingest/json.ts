@@ -128,7 +128,10 @@ export async function readJsonArray(path: string, sink: TableSink): Promise<void
       } else if (c === 34) inString = true;
       else if (c === 91 || c === 123) depth++;
       else if (c === 93 || c === 125) {
-        if (depth === 0) break; // the array's own closing bracket
+        if (depth === 0) {
+          if (c === 93) break; // the array's own closing bracket
+          continue; // a stray '}' stays in this record, which then fails to parse (breaking here would loop forever)
+        }
         depth--;
       } else if (c === 44 && depth === 0) break;
     }

@@ -72,6 +72,7 @@ async function run(kind: string, runs: number, prop: fc.IAsyncPropertyWithHooks<
   const result = await fc.check(prop as fc.IAsyncProperty<any>, { numRuns: n, seed, endOnFailure: true });
   const t = tallies.get(kind);
   if (t) t.ms = performance.now() - t0;
+  if (process.env.FUZZ_MEMORY) console.log(`${kind}: heap ${(process.memoryUsage().heapUsed / 2 ** 20).toFixed(0)} MiB`);
   if (result.failed) {
     console.error(`\nFAILED ${kind} after ${result.numRuns} inputs (seed ${seed}, path ${result.counterexamplePath}):`);
     console.error(String((result.errorInstance as Error | undefined)?.message ?? result.errorInstance));
