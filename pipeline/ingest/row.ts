@@ -42,6 +42,20 @@ export function rowContext(file: string, layout: HeaderLayout, positional: boole
   return { file, layout, columns, units, positional };
 }
 
+/**
+ * A table repeats a few citations over many rows, and the parser hands each row its own copy: kept
+ * per accepted row in the species records, they would cost a string each. Bounded, like the formula cache.
+ */
+const interned = new Map<string, string>();
+const INTERN_LIMIT = 10_000;
+function intern(s: string): string {
+  const hit = interned.get(s);
+  if (hit !== undefined) return hit;
+  if (interned.size >= INTERN_LIMIT) interned.clear();
+  interned.set(s, s);
+  return s;
+}
+
 export type RowResult = { row: SpeciesRow; findings?: undefined } | { row?: undefined; findings: Finding[] };
 
 export function parseNumberText(text: string): number | 'nan' | 'inf' | undefined {
@@ -123,7 +137,8 @@ export function normalizeRow(cells: readonly (string | undefined)[], line: numbe
     if (!phase) findings.push(makeFinding(badPhase, 'unknown', { text: excerpt(phaseText) }, loc(phaseSlot), ids));
     if (rest.length) state = rest.join(' ');
   }
-  const formulaText = text('formula') || name;
+  const formulaCell = text('formula');
+  const formulaText = formulaCell === '' || formulaCell === name ? name : formulaCell; // one string when they agree
   let formula;
   if (formulaText) {
     const split = splitPhaseSuffix(formulaText);
@@ -138,7 +153,8 @@ export function normalizeRow(cells: readonly (string | undefined)[], line: numbe
   }
 
   // formation values
-  const values: RowValues = { P_ref: 1, source: text('source'), location: { file, line } };
+  const location: Location = { file, line }; // one object for the row's values and its Cp range
+  const values: RowValues = { P_ref: 1, source: intern(text('source')), location };
   const dHf = number('dHf');
   const dGf = number('dGf');
   const S = number('S');
@@ -158,7 +174,7 @@ export function normalizeRow(cells: readonly (string | undefined)[], line: numbe
     else values.P_ref = P;
   }
   // a negative S° is not rejected here: the Gibbs–Helmholtz rule can tell a sign slip from other causes
-  const cp = readCp(text, number, list, layout, loc, ids, findings, { file, line });
+  const cp = readCp(text, number, list, layout, loc, ids, findings, location);
   if (findings.length === 0 && dHf === undefined && dGf === undefined && S === undefined && !cp) {
     findings.push(makeFinding(missingField, 'nothing', {}, { file, line }, ids));
   }
