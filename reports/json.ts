@@ -1,6 +1,81 @@
 // The JSON report: the Report itself, keys in a fixed order, two-space indent, trailing newline.
+//
+// A report of 10^6 rows holds 10^5–10^6 species summaries: as one string it would cost a few hundred
+// MB at once. `jsonChunks` yields the same bytes as `renderJson` piece by piece (one array element at a
+// time), and `writeJson` writes them to disk atomically without ever holding the whole text.
+import { closeSync, mkdirSync, openSync, renameSync, rmSync, writeSync } from 'node:fs';
+import { basename, dirname, join } from 'node:path';
+import { InputError } from '../pipeline/errors.js';
 import type { Report } from '../pipeline/types.js';
 
 export function renderJson(report: Report): string {
   return JSON.stringify(report, null, 2) + '\n';
+}
+
+/** JSON.stringify(value, null, 2) placed at `indent`: its inner lines shifted right (strings never hold a raw line feed). */
+function at(value: unknown, indent: string): string {
+  return JSON.stringify(value, null, 2).replace(/\n/g, '\n' + indent);
+}
+
+/** The text of renderJson(report), in pieces: top-level arrays element by element. */
+export function* jsonChunks(report: Report): Generator<string> {
+  const keys = Object.keys(report).filter((k) => {
+    const v = (report as unknown as Record<string, unknown>)[k];
+    return v !== undefined && typeof v !== 'function' && typeof v !== 'symbol';
+  });
+  if (keys.length === 0) {
+    yield '{}\n';
+    return;
+  }
+  yield '{\n';
+  for (let k = 0; k < keys.length; k++) {
+    const key = keys[k]!;
+    const value = (report as unknown as Record<string, unknown>)[key];
+    const end = k < keys.length - 1 ? ',\n' : '\n';
+    if (Array.isArray(value) && value.length > 0) {
+      yield `  ${JSON.stringify(key)}: [\n`;
+      for (let i = 0; i < value.length; i++) {
+        const el = value[i] === undefined || typeof value[i] === 'function' ? null : value[i];
+        yield '    ' + at(el, '    ') + (i < value.length - 1 ? ',\n' : '\n');
+      }
+      yield '  ]' + end;
+    } else {
+      yield `  ${JSON.stringify(key)}: ${at(value, '  ')}${end}`;
+    }
+  }
+  yield '}\n';
+}
+
+const FLUSH_CHARS = 1 << 20;
+
+/** Writes the JSON report to `path` through a temporary file and a rename (a killed run leaves no half report). */
+export function writeJson(path: string, report: Report): void {
+  const dir = dirname(path);
+  const tmp = join(dir, `.${basename(path)}.${process.pid}.tmp`);
+  let fd: number | undefined;
+  try {
+    mkdirSync(dir, { recursive: true });
+    fd = openSync(tmp, 'w');
+    let buf = '';
+    for (const piece of jsonChunks(report)) {
+      buf += piece;
+      if (buf.length >= FLUSH_CHARS) {
+        writeSync(fd, buf);
+        buf = '';
+      }
+    }
+    writeSync(fd, buf);
+    closeSync(fd);
+    fd = undefined;
+    renameSync(tmp, path);
+  } catch (e) {
+    try {
+      if (fd !== undefined) closeSync(fd);
+      rmSync(tmp, { force: true });
+    } catch {
+      // nothing was created there
+    }
+    const code = (e as NodeJS.ErrnoException).code ?? 'error';
+    throw new InputError('unwritable-output', `cannot write the report (${code})`, { file: path });
+  }
 }

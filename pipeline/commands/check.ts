@@ -1,6 +1,6 @@
 // `thermovet check`: read tables, run the rules, write the reports, set the verdict.
 import { Option, type Command } from 'commander';
-import { renderJson } from '../../reports/json.js';
+import { writeJson } from '../../reports/json.js';
 import { renderTerminal } from '../../reports/terminal.js';
 import { writeAtomic } from '../../reports/write.js';
 import { check } from '../check.js';
@@ -52,7 +52,7 @@ async function runCheck(tables: string[], flags: CheckFlags): Promise<number> {
   } finally {
     progress.finish();
   }
-  if (flags.json) writeAtomic(flags.json, renderJson(report));
+  if (flags.json) writeJson(flags.json, report); // streamed: a 10^6-row report is never one string
   if (!flags.quiet) process.stdout.write(renderTerminal(report, { color: useColor(flags.color), failOn: options.failOn }));
   return exitCodeFor(report.summary, options.failOn);
 }

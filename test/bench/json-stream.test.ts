@@ -1,0 +1,44 @@
+// The streamed JSON writer must give exactly the bytes of JSON.stringify(report, null, 2) + '\n'.
+import { mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { describe, expect, it } from 'vitest';
+import { check } from '../../pipeline/check.js';
+import { normalizeOptions } from '../../pipeline/options.js';
+import type { Report } from '../../pipeline/types.js';
+import { jsonChunks, renderJson, writeJson } from '../../reports/json.js';
+
+const dir = mkdtempSync(join(tmpdir(), 'thermovet-json-'));
+
+describe('streamed JSON report', () => {
+  it('equals renderJson on the demo dataset', async () => {
+    const report = await check(normalizeOptions({ tables: [], manifest: 'datasets/demo/manifest.yaml' }), { version: '0.0.0', generatedAt: '1970-01-01T00:00:00.000Z' });
+    expect(report.findings.length).toBeGreaterThan(0);
+    const out = join(dir, 'demo.json');
+    writeJson(out, report);
+    expect(readFileSync(out, 'utf8')).toBe(renderJson(report));
+  });
+
+  it('equals renderJson on awkward content: empty arrays, undefined keys, line feeds and quotes in text', () => {
+    const report = {
+      tool: { name: 'thermovet', version: '0' },
+      dataset: undefined,
+      summary: { rows: 1, accepted: 0, rejected: 1, species: 0, errors: 1, warnings: 0, infos: 0 },
+      findings: [
+        { rule: 'bad-number', severity: 'error', messageId: 'x', params: { text: 'a\nb "q" \u2028 \\' }, message: 'line1\nline2', location: { file: 'f.csv', line: 2 } },
+        { rule: 'r', severity: 'info', messageId: 'y', params: {}, message: '', location: { file: 'f.csv', line: 3, column: undefined } },
+      ],
+      species: [],
+      reactions: [{ id: 'R1', equation: 'A = B', file: 'r.csv', line: 2, balanced: true, points: [] }],
+      provenance: { generatedAt: 't', inputs: [], reference: { path: 'p', sha256: 's' }, options: { nested: [[1, 2], []] }, rules: ['a'] },
+    } as unknown as Report;
+    expect([...jsonChunks(report)].join('')).toBe(renderJson(report));
+    expect([...jsonChunks({} as Report)].join('')).toBe(renderJson({} as Report));
+  });
+
+  it('reports an unwritable path as exit-2 input error and leaves no file behind', () => {
+    const blocker = join(dir, 'a-file');
+    writeFileSync(blocker, 'x');
+    expect(() => writeJson(join(blocker, 'report.json'), {} as Report)).toThrow(/cannot write the report/);
+  });
+});
