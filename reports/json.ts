@@ -1,7 +1,7 @@
 // The JSON report: the Report itself, keys in a fixed order, two-space indent, trailing newline.
 //
 // A report of 10^6 rows holds 10^5–10^6 species summaries: as one string it would cost a few hundred
-// MB at once. `jsonChunks` yields the same bytes as `renderJson` piece by piece (one array element at a
+// MB at once. `jsonChunks` yields the same bytes as `renderJson` piece by piece (a few hundred array elements at a
 // time), and `writeJson` writes them to disk atomically without ever holding the whole text.
 import { closeSync, mkdirSync, openSync, renameSync, rmSync, writeSync } from 'node:fs';
 import { basename, dirname, join } from 'node:path';
@@ -11,6 +11,9 @@ import type { Report } from '../pipeline/types.js';
 export function renderJson(report: Report): string {
   return JSON.stringify(report, null, 2) + '\n';
 }
+
+/** array elements serialised per JSON.stringify call */
+const BATCH = 512;
 
 /** JSON.stringify(value, null, 2) placed at `indent`: its inner lines shifted right (strings never hold a raw line feed). */
 function at(value: unknown, indent: string): string {
@@ -34,9 +37,10 @@ export function* jsonChunks(report: Report): Generator<string> {
     const end = k < keys.length - 1 ? ',\n' : '\n';
     if (Array.isArray(value) && value.length > 0) {
       yield `  ${JSON.stringify(key)}: [\n`;
-      for (let i = 0; i < value.length; i++) {
-        const el = value[i] === undefined || typeof value[i] === 'function' ? null : value[i];
-        yield '    ' + at(el, '    ') + (i < value.length - 1 ? ',\n' : '\n');
+      // a batch inside two arrays comes out at exactly this depth: "[\n  [\n" + elements + "\n  ]\n]"
+      for (let i = 0; i < value.length; i += BATCH) {
+        const text = JSON.stringify([value.slice(i, i + BATCH)], null, 2);
+        yield text.slice(6, -6) + (i + BATCH < value.length ? ',\n' : '\n');
       }
       yield '  ]' + end;
     } else {

@@ -34,6 +34,11 @@ describe('streamed JSON report', () => {
     } as unknown as Report;
     expect([...jsonChunks(report)].join('')).toBe(renderJson(report));
     expect([...jsonChunks({} as Report)].join('')).toBe(renderJson({} as Report));
+    // arrays longer than one serialisation batch, ending on and off a batch boundary
+    for (const n of [511, 512, 513, 1024, 1300]) {
+      const many = { ...report, findings: Array.from({ length: n }, (_, i) => ({ ...report.findings[i % 2]!, location: { file: 'f.csv', line: i + 2 } })) } as Report;
+      expect([...jsonChunks(many)].join('')).toBe(renderJson(many));
+    }
   });
 
   it('reports an unwritable path as exit-2 input error and leaves no file behind', () => {
