@@ -152,12 +152,16 @@ function figure(svg: string, label: string, caption: string, kind: 'cp' | 'lnK' 
   return `<figure class="chart"><div role="img" aria-label="${esc(label)}">${svg}</div><ul class="key">${key}</ul><figcaption>${caption}</figcaption></figure>`;
 }
 
+/** Fixed decimals for table columns, so digits line up: ln K to 0.001, ΔrG° to 0.01 kJ/mol. */
+const fixed = (v: number | undefined, digits: number): string => (v === undefined || !Number.isFinite(v) ? '—' : esc(v.toFixed(digits)));
+
 function reactionTable(r: ReactionResult): string {
+  if (r.points.length === 0) return '';
   const rows = r.points
     .map(
       (p) =>
-        `<tr><td class="num">${n(p.T)}</td><td class="num">${n(p.lnK)}</td><td class="num">${n(p.lnKShortcut)}</td><td class="num">${n(p.lnK - p.lnKShortcut)}</td>` +
-        `<td class="num">${n(p.u_lnK)}</td><td class="num">${n(p.dG)}</td><td>${p.extrapolated.map((e) => `${esc(e.species)} (+${n(e.outsideK)} K, Cp ${n(e.cp)})`).join(', ') || '—'}</td></tr>`,
+        `<tr><td class="num">${n(p.T)}</td><td class="num">${fixed(p.lnK, 3)}</td><td class="num">${fixed(p.lnKShortcut, 3)}</td><td class="num">${fixed(p.lnK - p.lnKShortcut, 3)}</td>` +
+        `<td class="num">${fixed(p.u_lnK, 3)}</td><td class="num">${fixed(p.dG, 2)}</td><td>${p.extrapolated.map((e) => `${esc(e.species)} (+${n(e.outsideK)} K, Cp ${n(e.cp)})`).join(', ') || '—'}</td></tr>`,
     )
     .join('');
   return (
