@@ -6,7 +6,8 @@
 // (the logarithmic one resolves the T⁻¹ and T⁻² terms near the low end), plus any listed temperatures
 // (a tabulated Cp has its extremes on its nodes). Every sampled local minimum and maximum is then
 // refined by golden-section search between its two neighbouring samples, so the extremes found are
-// those of the function, not of the grid.
+// those of the function, not of the grid. A scan keeps only what the rules read (the extremes and the
+// sampled turning points), not the ~110 samples: a million-row table has a million scans.
 
 import type { CpCurve, CpSegment, CpSpec, Location, Species } from '../types.js';
 import { buildCurve, buildSegment } from './index.js';
@@ -25,8 +26,8 @@ export interface CpPoint {
 }
 
 export interface CpScan {
-  /** the sampled points, ascending in T, first and last at the ends of the interval */
-  samples: CpPoint[];
+  /** the turning points of the sampled sequence, ascending in T, with both ends of the interval */
+  turns: CpPoint[];
   min: CpPoint;
   max: CpPoint;
 }
@@ -134,31 +135,57 @@ export function goldenMin(f: (T: number) => number, lo: number, hi: number): CpP
   return fc <= fd ? { T: c, cp: fc } : { T: d, cp: fd };
 }
 
+// Scratch buffers for the samples, grown as needed and reused by every scan (scans never nest).
+let bufT = new Float64Array(256);
+let bufCp = new Float64Array(256);
+
 /**
  * Samples f densely over [a, b] and finds its minimum and maximum: the best sampled point, refined by
  * golden-section search between the neighbours of every sampled local extremum, and the two ends.
  */
 export function scanFunction(f: (T: number) => number, a: number, b: number, extra: readonly number[] = []): CpScan {
-  const Ts = sampleGrid(a, b, extra);
-  const samples = Ts.map((T) => ({ T, cp: f(T) }));
-  let min = samples[0];
-  let max = samples[0];
-  for (const s of samples) {
-    if (s.cp < min.cp) min = s;
-    if (s.cp > max.cp) max = s;
+  const grid = sampleGrid(a, b, extra);
+  const n = grid.length;
+  if (bufT.length < n) {
+    bufT = new Float64Array(2 * n);
+    bufCp = new Float64Array(2 * n);
   }
-  for (let i = 1; i < samples.length - 1; i++) {
-    const [p, s, n] = [samples[i - 1], samples[i], samples[i + 1]];
-    if (s.cp <= p.cp && s.cp <= n.cp) {
-      const m = goldenMin(f, p.T, n.T);
-      if (m.cp < min.cp) min = m;
-    }
-    if (s.cp >= p.cp && s.cp >= n.cp) {
-      const m = goldenMin((T) => -f(T), p.T, n.T);
-      if (-m.cp > max.cp) max = { T: m.T, cp: -m.cp };
-    }
+  const T = bufT;
+  const cp = bufCp;
+  let iMin = 0;
+  let iMax = 0;
+  for (let i = 0; i < n; i++) {
+    T[i] = grid[i];
+    cp[i] = f(grid[i]);
+    if (cp[i] < cp[iMin]) iMin = i;
+    if (cp[i] > cp[iMax]) iMax = i;
   }
-  return { samples, min, max };
+  let min: CpPoint = { T: T[iMin], cp: cp[iMin] };
+  let max: CpPoint = { T: T[iMax], cp: cp[iMax] };
+  const turns: CpPoint[] = [{ T: T[0], cp: cp[0] }];
+  let dir = 0;
+  for (let i = 1; i < n; i++) {
+    if (i < n - 1 && !(cp[i] === cp[i - 1] && cp[i] === cp[i + 1])) {
+      // a sampled local extremum (a flat stretch has none to refine)
+      const p = cp[i - 1];
+      const s = cp[i];
+      const q = cp[i + 1];
+      if (s <= p && s <= q) {
+        const m = goldenMin(f, T[i - 1], T[i + 1]);
+        if (m.cp < min.cp) min = m;
+      }
+      if (s >= p && s >= q) {
+        const m = goldenMin((x) => -f(x), T[i - 1], T[i + 1]);
+        if (-m.cp > max.cp) max = { T: m.T, cp: -m.cp };
+      }
+    }
+    const d = Math.sign(cp[i] - cp[i - 1]);
+    if (d === 0) continue;
+    if (dir !== 0 && d !== dir) turns.push({ T: T[i - 1], cp: cp[i - 1] });
+    dir = d;
+  }
+  if (n > 1) turns.push({ T: T[n - 1], cp: cp[n - 1] });
+  return { turns, min, max };
 }
 
 /** The location of a Cp row, pointing at one of its fields when the table says where that field is. */

@@ -3,11 +3,12 @@
 // or order–disorder contribution); two or more is the oscillation of an over-fitted or damaged
 // polynomial.
 //
-// Extrema are the sign changes of dCp/dT on the dense scan of the range, kept only when they are
-// significant: the turning points are simplified by persistence, repeatedly dropping the smallest
-// swing (between neighbouring turning points, or a turning point and an end of the range) while it
-// is below max(0.5 % of the largest |Cp| in the range, 0.05 J/(mol K)). A published fit's ripple of a
-// few hundredths of a J/(mol K) is therefore not counted; an oscillation is.
+// Extrema are the sign changes of dCp/dT on the dense scan of the range (the scan's turning points),
+// kept only when they are significant: the turning points are simplified by persistence, repeatedly
+// dropping the smallest swing (between neighbouring turning points, or a turning point and an end of
+// the range) while it is below max(0.5 % of the largest |Cp| in the range, 0.05 J/(mol K)). A
+// published fit's ripple of a few hundredths of a J/(mol K) is therefore not counted; an oscillation
+// is.
 import { cpLocation, scanOf, speciesCp, type CpPoint } from '../cp/curve-cache.js';
 import type { Finding, Rule, Species } from '../types.js';
 import { makeFinding } from './finding.js';
@@ -76,7 +77,7 @@ rule.check = (sp: Species): Finding[] => {
   for (const spec of cp.specs) {
     const scan = scanOf(spec);
     const scale = Math.max(Math.abs(scan.max.cp), Math.abs(scan.min.cp));
-    const ext = significantExtrema(scan.samples, Math.max(WIGGLE_RELATIVE * scale, WIGGLE_ABSOLUTE));
+    const ext = significantExtrema(scan.turns, Math.max(WIGGLE_RELATIVE * scale, WIGGLE_ABSOLUTE));
     if (ext.length <= WIGGLE_ALLOWED) continue;
     let swing = 0;
     for (let i = 1; i < ext.length; i++) swing = Math.max(swing, Math.abs(ext[i].cp - ext[i - 1].cp));
