@@ -1,13 +1,15 @@
-// One Cp curve per species and one dense scan per Cp range, built on first use and kept for as long
-// as the Species (or CpSpec) object lives. Every Cp rule and the report summary read these, so a
-// species' segments are built once however many rules look at them.
+// One Cp curve per species and one dense scan per Cp range, built on first use and kept while the
+// pipeline is looking at that species. Every Cp rule and the report summary read these, so a
+// species' segments are built once however many rules look at them; the rules run species by
+// species, so only the species in hand is kept (a million-row table does not hold a million curves).
+// Asking for another species, or for a spec that is not the current species', builds afresh.
 //
 // A scan samples Cp on a grid that is the union of a linear and a logarithmic grid over the range
 // (the logarithmic one resolves the T⁻¹ and T⁻² terms near the low end), plus any listed temperatures
 // (a tabulated Cp has its extremes on its nodes). Every sampled local minimum and maximum is then
 // refined by golden-section search between its two neighbouring samples, so the extremes found are
 // those of the function, not of the grid. A scan keeps only what the rules read (the extremes and the
-// sampled turning points), not the ~110 samples: a million-row table has a million scans.
+// sampled turning points), not the ~110 samples.
 
 import type { CpCurve, CpSegment, CpSpec, Location, Species } from '../types.js';
 import { buildCurve, buildSegment } from './index.js';
@@ -36,43 +38,45 @@ const LINEAR_POINTS = 64;
 const LOG_POINTS = 48;
 const GOLDEN_ITERATIONS = 60; // shrinks a bracket by 0.618^60 ≈ 3e-13
 
-const bySpecies = new WeakMap<Species, SpeciesCp | null>();
-const bySpec = new WeakMap<CpSpec, { segment: CpSegment; scan?: CpScan }>();
+/** The species in hand: its curve (undefined when it has none) and the scans asked for so far. */
+let current: { sp: Species; cp: SpeciesCp | undefined; scans: (CpScan | undefined)[] } | undefined;
+
+function build(sp: Species): SpeciesCp | undefined {
+  if (sp.cp.length === 0) return undefined;
+  try {
+    const specs = sp.cp.slice().sort((a, b) => a.Tmin - b.Tmin || a.Tmax - b.Tmax);
+    const segments = specs.map(buildSegment);
+    return { specs, segments, curve: buildCurve(segments) };
+  } catch {
+    return undefined; // ingest rejects specs that do not build; a hand-made Species may still carry one
+  }
+}
 
 /** The species' segments and joined curve; undefined when it has no Cp or a range cannot be built. */
 export function speciesCp(sp: Species): SpeciesCp | undefined {
-  const hit = bySpecies.get(sp);
-  if (hit !== undefined) return hit ?? undefined;
-  let built: SpeciesCp | null = null;
-  if (sp.cp.length > 0) {
-    try {
-      const specs = sp.cp.slice().sort((a, b) => a.Tmin - b.Tmin || a.Tmax - b.Tmax);
-      const segments = specs.map(segmentOf);
-      built = { specs, segments, curve: buildCurve(segments) };
-    } catch {
-      built = null; // ingest rejects specs that do not build; a hand-made Species may still carry one
-    }
-  }
-  bySpecies.set(sp, built);
-  return built ?? undefined;
+  if (current?.sp !== sp) current = { sp, cp: build(sp), scans: [] };
+  return current.cp;
 }
 
-/** The analytic segment of one Cp specification, built once. Throws CpSpecError like buildSegment. */
+/** Index of spec among the current species' specs, or −1. */
+function currentIndex(spec: CpSpec): number {
+  return current?.cp ? current.cp.specs.indexOf(spec) : -1;
+}
+
+/** The analytic segment of one Cp specification. Throws CpSpecError like buildSegment. */
 export function segmentOf(spec: CpSpec): CpSegment {
-  let e = bySpec.get(spec);
-  if (!e) {
-    e = { segment: buildSegment(spec) };
-    bySpec.set(spec, e);
-  }
-  return e.segment;
+  const i = currentIndex(spec);
+  return i >= 0 ? current!.cp!.segments[i] : buildSegment(spec);
 }
 
-/** The dense scan of one range over its own [Tmin, Tmax], built once. */
+/** The dense scan of one range over its own [Tmin, Tmax]. */
 export function scanOf(spec: CpSpec): CpScan {
+  const i = currentIndex(spec);
+  if (i >= 0 && current!.scans[i]) return current!.scans[i]!;
   const segment = segmentOf(spec);
-  const e = bySpec.get(spec)!;
-  if (!e.scan) e.scan = scanFunction((T) => segment.cp(T), spec.Tmin, spec.Tmax, spec.temps);
-  return e.scan;
+  const scan = scanFunction((T) => segment.cp(T), spec.Tmin, spec.Tmax, spec.temps);
+  if (i >= 0) current!.scans[i] = scan;
+  return scan;
 }
 
 /** Sample grid over [a, b] (0 < a < b): linear ∪ logarithmic ∪ extra points inside, ascending, unique. */
