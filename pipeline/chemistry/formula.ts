@@ -679,7 +679,13 @@ function parseUncached(text: string): Formula {
 }
 
 const CACHE_LIMIT = 100_000;
-const cache = new Map<string, Formula | FormulaError>();
+/** A failed parse is cached as its parts, not as the Error: a thrown Error's stack keeps its callers' closures alive. */
+interface CachedFailure {
+  code: FormulaErrorCode;
+  message: string;
+  index: number;
+}
+const cache = new Map<string, Formula | CachedFailure>();
 
 /**
  * Parses a chemical formula (see the grammar at the top of this file). Results are cached by text
@@ -695,12 +701,12 @@ export function parseFormula(text: string): Formula {
       hit = Object.freeze(f);
     } catch (err) {
       if (!(err instanceof FormulaError)) throw err;
-      hit = err;
+      hit = { code: err.code, message: err.message, index: err.index };
     }
     if (cache.size >= CACHE_LIMIT) cache.clear();
     cache.set(text, hit);
   }
-  if (hit instanceof FormulaError) throw hit;
+  if ('code' in hit) throw new FormulaError(hit.code, hit.message, hit.index, text);
   return hit;
 }
 
