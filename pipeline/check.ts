@@ -8,7 +8,7 @@ import { SpeciesStore } from './records.js';
 import { speciesSummary } from './summary.js';
 import { DATASET_RULES, RULES, SPECIES_RULES } from './rules/index.js';
 import { impactOfFindings, loadReactions, runEquilibrium } from './equilibrium/index.js';
-import { CHART_SPECIES_LIMIT, type CheckContext, type Finding, type OptionsNormalized, type ReactionResult, type Report, type Summary } from './types.js';
+import { CHART_SPECIES_LIMIT, type CheckContext, type Finding, type OptionsNormalized, type ReactionResult, type Report, type Species, type SpeciesSummary, type Summary } from './types.js';
 
 export interface RunInfo {
   version: string;
@@ -88,12 +88,22 @@ export async function check(options: OptionsNormalized, run: RunInfo): Promise<R
   findings.sort(compareFindings);
   const chartKeys = new Set([...charted].slice(0, CHART_SPECIES_LIMIT)); // reaction species first, then Cp findings
   const inputs = await Promise.all([...options.tables.map((t) => t.path), ...(options.reactionsFile ? [options.reactionsFile] : [])].map((p) => fileDigest(p)));
+  // Each species is let go as soon as its summary is made, so the records and the summaries are never
+  // both whole in memory (at 10^6 rows each is several hundred MB).
+  const speciesCount = species.length;
+  store.byKey.clear();
+  const summaries = new Array<SpeciesSummary>(speciesCount);
+  for (let i = 0; i < speciesCount; i++) {
+    const sp = species[i]!;
+    summaries[i] = speciesSummary(sp, reference, options.useWindow, chartKeys.has(sp.key));
+    (species as (Species | undefined)[])[i] = undefined;
+  }
   return {
     tool: { name: 'thermovet', version: run.version },
     dataset: { name: options.name, useWindow: options.useWindow },
-    summary: summarize(rows, accepted, rejected, species.length, findings),
+    summary: summarize(rows, accepted, rejected, speciesCount, findings),
     findings,
-    species: species.map((sp) => speciesSummary(sp, reference, options.useWindow, chartKeys.has(sp.key))),
+    species: summaries,
     ...(reactions ? { reactions } : {}),
     provenance: {
       generatedAt: run.generatedAt,
