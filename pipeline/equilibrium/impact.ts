@@ -20,6 +20,7 @@
 //      for S°; our choice, not a published value).
 //   5. A finding on the species with no field: the species' own share of u(ln K), from its stated
 //      uncertainties or the same defaults, root-sum-square over the values the route reads.
+//   6. A finding that questions no value (an exact repeat of an earlier row): no impact.
 import { R_J_PER_MOL_K, T_REF_K } from '../cp/constants.js';
 import { fromDeclared } from '../units/convert.js';
 import type { CpCurve, Finding } from '../types.js';
@@ -31,6 +32,8 @@ import { fieldsUsed, lnKSensitivity, type Field } from './uncertainty.js';
 export const DEFAULT_UNCERTAINTY: Readonly<Record<Field, number>> = { dHf: 1000, dGf: 1000, S: 1 };
 
 const FIELDS: readonly Field[] = ['dHf', 'dGf', 'S'];
+/** Rules whose findings leave every value as it is: removing the repeat changes no ln K. */
+const QUESTION_NO_VALUE = new Set(['duplicate-row']);
 const isField = (f: unknown): f is Field => typeof f === 'string' && (FIELDS as readonly string[]).includes(f);
 
 /** ΔfH° and S° the route would use with some values replaced (SI). */
@@ -86,6 +89,7 @@ function effectOf(f: Finding, th: SpeciesThermo): Effect | undefined {
     return (T) => Math.abs((dH - T * dS) / (R * T));
   };
   if (f.rule === 'reaction-data') return undefined; // no Cp at all: nothing to compare against
+  if (QUESTION_NO_VALUE.has(f.rule)) return undefined;
   const d = f.diagnosis;
   if (d && isField(d.field)) {
     const corrected = fromDeclared(d.corrected, d.field, th.species.units[d.field]);
