@@ -17,11 +17,22 @@ function program(): Command {
     .version(version, '-V, --version')
     .exitOverride()
     .configureOutput({ writeErr: (s) => process.stderr.write(s) });
+  p.hook('preAction', (_root, action) => refuseEmptyValues(action));
   registerCheck(p);
   registerLnk(p);
   registerDiff(p);
   registerExport(p);
   return p;
+}
+
+/** An option given an empty value (`--json ''`) would otherwise be taken as not given at all. */
+function refuseEmptyValues(cmd: Command): void {
+  for (const opt of cmd.options) {
+    const value: unknown = cmd.getOptionValue(opt.attributeName());
+    if (value === '' || (Array.isArray(value) && value.includes(''))) {
+      throw new InputError('empty-option', `option ${opt.long ?? opt.short} was given an empty value`);
+    }
+  }
 }
 
 /** Output to a closed pipe (`thermovet … | head`) ends the run quietly. */

@@ -102,12 +102,14 @@ export function loadReactions(path: string): { reactions: ReactionSpec[]; findin
   const seen = new Map<string, number>();
   let col: Partial<Record<'id' | 'equation' | 'T' | 'Tmin' | 'Tmax', { index: number; factor: number; offset: number }>> | undefined;
   let nextLine = 1;
+  let headerLine = 1;
   for (const record of records) {
     const line = nextLine;
     nextLine += 1 + record.reduce((n, c) => n + (c.match(/\n/g)?.length ?? 0), 0);
     if (record.length === 1 && record[0]!.trim() === '') continue;
     if (record[0]!.trimStart().startsWith('#')) continue;
     if (!col) {
+      headerLine = line;
       col = {};
       record.forEach((h, index) => {
         const { key, unit } = headerKey(h);
@@ -200,6 +202,9 @@ export function loadReactions(path: string): { reactions: ReactionSpec[]; findin
     reactions.push(spec);
   }
   if (!col) throw new InputError('empty-file', 'the reactions file has no header and no rows', { file: path, line: 1 });
+  if (reactions.length === 0 && findings.length === 0) {
+    throw new InputError('no-reactions', 'the reactions file has a header but no reaction rows: add one row per reaction (id, equation, T or Tmin and Tmax)', { file: path, line: headerLine });
+  }
   return { reactions, findings };
 }
 
