@@ -1,6 +1,7 @@
 // The terminal summary: counts, the verdict, then the worst findings grouped by species with file:line.
 // Bounded: however many findings there are, it prints at most `limit` of them plus counts per rule.
 import { failingCount } from '../pipeline/verdict.js';
+import { excerpt } from '../pipeline/errors.js';
 import type { FailOn, Finding, Report, Severity } from '../pipeline/types.js';
 
 export interface TerminalOptions {
@@ -56,7 +57,7 @@ export function renderTerminal(report: Report, opts: TerminalOptions): string {
   out.push('');
   out.push(c.bold(`Worst findings${shown.length < report.findings.length ? ` (${shown.length} of ${report.findings.length})` : ''}`));
   for (const [key, list] of groups) {
-    out.push(`  ${c.bold(inert(key))}`);
+    out.push(`  ${c.bold(inert(excerpt(key, 80)))}`); // a species name can be a whole paragraph
     for (const f of list) {
       const at = `${f.location.file}:${f.location.line}${f.location.column ? `:${f.location.column}` : ''}`;
       const impact = impactOf(f) > 0 ? c.dim(` [Δln K up to ${impactOf(f).toPrecision(3)}]`) : '';

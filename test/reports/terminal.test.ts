@@ -6,6 +6,8 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { createProgress, estimateRows } from '../../reports/progress.js';
+import { renderTerminal } from '../../reports/terminal.js';
+import { makeReport } from './fixture.js';
 import { CLI, NO_STACK, thermovet } from '../cli/run.js';
 
 function fakeStream(isTTY: boolean) {
@@ -95,5 +97,18 @@ describe('the CLI at the terminal', () => {
     expect(out).toMatch(/^thermovet /);
     expect(err).toBe('');
     expect(code).toBe(0);
+  });
+});
+
+describe('the terminal summary', () => {
+  it('cuts a species name of a whole paragraph in its group heading, escaping its control characters', () => {
+    const name = 'Q'.repeat(5000) + '\u001b[31m';
+    const report = makeReport();
+    report.findings = [{ rule: 'gibbs-helmholtz', severity: 'error', messageId: 'm', params: {}, message: 'residual', location: { file: 't.csv', line: 2 }, species: name, phase: 'g' }];
+    const text = renderTerminal(report, { color: false, failOn: 'error' });
+    const heading = text.split('\n').find((l) => l.startsWith('  Q'))!;
+    expect(heading.length).toBeLessThan(100);
+    expect(heading.endsWith('…')).toBe(true);
+    expect(text).not.toContain('\u001b');
   });
 });
