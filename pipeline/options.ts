@@ -47,6 +47,23 @@ function isDirectory(path: string, manifest?: string): boolean {
   }
 }
 
+/** A file the manifest names must exist; if not, the message points at the manifest's line. */
+function requireListed(path: string, listedAs: string, manifest: string, field: string): void {
+  let exists = true;
+  try {
+    statSync(path);
+  } catch {
+    exists = false;
+  }
+  if (!exists) {
+    throw new InputError('missing-file', `${field} "${excerpt(listedAs)}" named in the manifest: no such file (looked for ${excerpt(path, 200)})`, {
+      file: manifest,
+      line: lineOfText(manifest, listedAs),
+      field,
+    });
+  }
+}
+
 function lineOfText(file: string, needle: string): number | undefined {
   try {
     const idx = readFileSync(file, 'utf8').split(/\r?\n/).findIndex((l) => l.includes(needle));
@@ -78,7 +95,9 @@ export function normalizeOptions(o: Options): OptionsNormalized {
   } else if (manifest) {
     for (const t of manifest.tables) {
       const path = typeof t === 'string' ? t : t.path;
-      tables.push({ path: fromManifest(path), format: pickFormat(path, typeof t === 'string' ? undefined : t.format, o.manifest) });
+      const format = pickFormat(path, typeof t === 'string' ? undefined : t.format, o.manifest);
+      requireListed(resolve(base, path), path, o.manifest!, 'tables');
+      tables.push({ path: fromManifest(path), format });
     }
   }
   if (tables.length === 0) throw new InputError('no-tables', 'no table to check: give table files, or a manifest that lists them');
@@ -102,6 +121,8 @@ export function normalizeOptions(o: Options): OptionsNormalized {
     throw new InputError('bad-window', `use_window: Tmin ${w.Tmin} K must be below Tmax ${w.Tmax} K`, { file: o.manifest, line: o.manifest ? lineOfText(o.manifest, 'Tmin') : undefined, field: 'use_window' });
   }
   const useWindow = w ? { ...w, ...(w.temperatures ? { temperatures: [...w.temperatures].sort((a, b) => a - b) } : {}) } : {};
+  if (!o.reactions && manifest?.reactions) requireListed(resolve(base, manifest.reactions), manifest.reactions, o.manifest!, 'reactions');
+  if (!o.waivers && manifest?.waivers) requireListed(resolve(base, manifest.waivers), manifest.waivers, o.manifest!, 'waivers');
   const reactionsFile = o.reactions ? displayPath(o.reactions) : manifest?.reactions ? fromManifest(manifest.reactions) : undefined;
   const waiversFile = o.waivers ? displayPath(o.waivers) : manifest?.waivers ? fromManifest(manifest.waivers) : undefined;
   const tol = manifest?.tolerances ?? {};
