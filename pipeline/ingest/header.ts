@@ -43,6 +43,13 @@ export function resolveHeader(
     const bracketUnit = m ? m[2]!.trim() : undefined;
     const mapped = mapLower.get(header.toLowerCase()) ?? mapLower.get(bare.toLowerCase());
     const def = canonicalColumn(mapped ?? bare);
+    if (!def && !m && mapped === undefined && header.includes('[')) {
+      // "dHf [kJ]/mol]", "dHf [kJ/mol] x": a known column whose unit is mangled is not an unknown column to ignore
+      const named = canonicalColumn(header.slice(0, header.indexOf('[')).trim());
+      if (named) {
+        throw new InputError('unknown-unit', `header "${excerpt(header)}" names column ${named.name}, but its unit cannot be read: write it in one pair of brackets at the end, e.g. "${named.name} [${named.defaultUnit ?? 'unit'}]"`, { file, line, field: header });
+      }
+    }
     if (!def) {
       if (mapped !== undefined) {
         throw new InputError('unknown-column', `the manifest maps header "${excerpt(header)}" to "${excerpt(mapped)}", which is not a column thermovet knows (known: ${COLUMNS.map((c) => c.name).join(', ')})`, { file, line, field: header });
