@@ -6,7 +6,7 @@ import { writeAtomic } from '../../reports/write.js';
 import { check } from '../check.js';
 import { normalizeOptions, type Options } from '../options.js';
 import { exitCodeFor } from '../verdict.js';
-import { generatedAt, useColor, version } from './shared.js';
+import { generatedAt, useColor, version, waiverDay } from './shared.js';
 import { createProgress, estimateRows } from '../../reports/progress.js';
 import { fieldColumns, renderSarif } from '../../reports/sarif.js';
 import { fileDigest } from '../provenance.js';
@@ -42,7 +42,7 @@ async function runCheck(tables: string[], flags: CheckFlags): Promise<number> {
     const expected = estimateRows(options.tables.map((t) => t.path));
     report = await check(options, { version, generatedAt: stamp, onProgress: (rows) => progress.update('reading rows', rows, Math.max(expected, rows + 1)) });
     if (waivers && options.waiversFile) {
-      report = waiveReport(report, waivers, stamp.slice(0, 10)); // the day of the run: the clock's, or the fixed one of a deterministic run
+      report = waiveReport(report, waivers, waiverDay()); // the clock's day (or SOURCE_DATE_EPOCH's), also under --deterministic
       const inputs = [...report.provenance.inputs, await fileDigest(options.waiversFile)];
       report = { ...report, provenance: { ...report.provenance, inputs, options: { ...report.provenance.options, waivers: options.waiversFile } } };
     }

@@ -6,7 +6,7 @@ import { writeAtomic } from '../../reports/write.js';
 import { diffDatasets } from '../diff/index.js';
 import { renderDiffJson, renderDiffTerminal } from '../diff/render.js';
 import type { FailOn } from '../types.js';
-import { generatedAt, useColor, version } from './shared.js';
+import { generatedAt, useColor, version, waiverDay } from './shared.js';
 
 interface DiffFlags {
   reactions?: string;
@@ -21,7 +21,7 @@ interface DiffFlags {
 async function runDiff(oldPath: string, newPath: string, flags: DiffFlags): Promise<number> {
   const fmt = flags.format ? { format: flags.format } : {};
   const opts = { failOn: flags.failOn, ...(flags.reactions ? { reactionsFile: flags.reactions } : {}) };
-  const d = await diffDatasets({ path: oldPath, ...fmt }, { path: newPath, ...fmt }, opts, { version, generatedAt: generatedAt(!!flags.deterministic) });
+  const d = await diffDatasets({ path: oldPath, ...fmt }, { path: newPath, ...fmt }, opts, { version, generatedAt: generatedAt(!!flags.deterministic), waiverDay: waiverDay() });
   if (flags.json) writeAtomic(flags.json, renderDiffJson(d));
   if (!flags.quiet) process.stdout.write(renderDiffTerminal(d, { color: useColor(flags.color) }));
   return d.summary.failing > 0 ? 1 : 0;

@@ -7,7 +7,7 @@ import { exportTables, type DropOn } from '../export/index.js';
 import { normalizeOptions, type Options } from '../options.js';
 import type { FailOn } from '../types.js';
 import { exitCodeFor } from '../verdict.js';
-import { generatedAt, version } from './shared.js';
+import { generatedAt, version, waiverDay } from './shared.js';
 
 interface ExportFlags {
   manifest?: string;
@@ -27,7 +27,7 @@ async function runExport(tables: string[], flags: ExportFlags): Promise<number> 
   if (flags.format) o.format = flags.format;
   if (flags.waivers) o.waivers = flags.waivers;
   const options = normalizeOptions(o);
-  const r = await exportTables(options, { out: flags.out, dropOn: flags.dropOn, ...(flags.json ? { reportPath: flags.json } : {}) }, { version, generatedAt: generatedAt(!!flags.deterministic) });
+  const r = await exportTables(options, { out: flags.out, dropOn: flags.dropOn, ...(flags.json ? { reportPath: flags.json } : {}) }, { version, generatedAt: generatedAt(!!flags.deterministic), waiverDay: waiverDay() });
   if (!flags.quiet) {
     const left = r.speciesLeftOut.length ? ` (species left out: ${r.speciesLeftOut.slice(0, 10).join(', ')}${r.speciesLeftOut.length > 10 ? ', …' : ''})` : '';
     process.stdout.write(

@@ -171,6 +171,17 @@ describe('thermovet check --waivers (built CLI, invented demo)', () => {
     expect(rep.findings.filter((f: Finding) => f.waived)).toHaveLength(0);
   });
 
+  it('expired under --deterministic too: fixing the timestamp does not bring a lapsed waiver back', () => {
+    const w = file('demo-expired-det.yaml', WAIVERS('2001-01-31'));
+    const out = join(dir, 'expired-det.json');
+    const r = thermovet(['check', '--manifest', demo, '--waivers', w, '--json', out, '--fail-on', 'error', '-q', '--deterministic']);
+    expect(r.code).toBe(1);
+    const rep = readReport(out);
+    expect(rep.provenance.generatedAt).toBe('1970-01-01T00:00:00.000Z');
+    expect(rep.findings.filter((f: Finding) => f.rule === 'waiver-expired')).toHaveLength(2);
+    expect(rep.findings.filter((f: Finding) => f.waived)).toHaveLength(0);
+  });
+
   it('a broken waivers file is unusable input: exit 2 with file and line', () => {
     const w = file('broken.yaml', '- rule: duplicate-row\n  species: H2O\n  reason: r\n  accepted_by: x\n  expires: someday\n');
     const r = thermovet(['check', '--manifest', demo, '--waivers', w, '-q']);
