@@ -9,6 +9,9 @@
 //   1. A diagnosis (a known slip with its corrected value, in the declared unit): the data as given
 //      against the corrected value (converted to SI with the column's declared unit). A corrected
 //      value in a field the route does not read (ΔfG° when ΔfH° and S° are given) moves ln K by 0.
+//      A unit slip in a Cp correlation (diagnosis.field 'cp_unit', from cp-gas-bounds or
+//      cp-solid-bounds): the curve as given against the curve with that range's Cp rescaled by the
+//      slip's factor, both integrated from 298.15 K through the joins.
 //   2. A Cp extrapolation (rule ids containing 'extrapolat' or 'coverage'): the rigorous route
 //      against the same curve with Cp frozen at its value at the nearest end of the fitted range
 //      outside it. The spread is how much the answer hangs on the extrapolated polynomial.
@@ -22,8 +25,10 @@
 //      uncertainties or the same defaults, root-sum-square over the values the route reads.
 //   6. A finding that questions no value (an exact repeat of an earlier row): no impact.
 import { R_J_PER_MOL_K, T_REF_K } from '../cp/constants.js';
+import { buildCurve, buildSegment } from '../cp/index.js';
+import { cpUnitSlips } from '../rules/cp-gas-bounds.js';
 import { fromDeclared } from '../units/convert.js';
-import type { CpCurve, Finding } from '../types.js';
+import type { CpCurve, CpSpec, Finding } from '../types.js';
 import type { ResolvedReaction } from './reactions.js';
 import type { SpeciesThermo } from './thermo.js';
 import { fieldsUsed, lnKSensitivity, type Field } from './uncertainty.js';
@@ -80,6 +85,25 @@ export function frozenDS(c: CpCurve, T: number): number {
  */
 type Effect = (T: number) => number;
 
+/**
+ * The species' Cp curve with the range of the finding's row rescaled by the diagnosed unit slip's
+ * factor, or undefined when the finding's row holds no poly or table range or the cause is not a
+ * unit slip of that range's declared unit.
+ */
+export function curveWithUnitFix(th: SpeciesThermo, f: Finding): CpCurve | undefined {
+  const cause = f.diagnosis?.cause;
+  const specs = th.species.cp.slice().sort((a, b) => a.Tmin - b.Tmin || a.Tmax - b.Tmax);
+  const at = (s: CpSpec): boolean => s.location.file === f.location.file && s.location.line === f.location.line;
+  const target = specs.find(at);
+  const slip = target ? cpUnitSlips(target).find((x) => x.cause === cause) : undefined;
+  if (!target || !slip) return undefined;
+  try {
+    return buildCurve(specs.map((s) => buildSegment(s === target ? { ...s, unitFactor: s.unitFactor * slip.factor } : s)));
+  } catch {
+    return undefined;
+  }
+}
+
 function effectOf(f: Finding, th: SpeciesThermo): Effect | undefined {
   const R = R_J_PER_MOL_K;
   const shift = (o: Partial<Record<Field, number>>): Effect => {
@@ -91,6 +115,11 @@ function effectOf(f: Finding, th: SpeciesThermo): Effect | undefined {
   if (f.rule === 'reaction-data') return undefined; // no Cp at all: nothing to compare against
   if (QUESTION_NO_VALUE.has(f.rule)) return undefined;
   const d = f.diagnosis;
+  if (d?.field === 'cp_unit' && th.curve) {
+    const given = th.curve;
+    const fixed = curveWithUnitFix(th, f);
+    if (fixed) return (T) => Math.abs((fixed.dH(T) - given.dH(T) - T * (fixed.dS(T) - given.dS(T))) / (R * T));
+  }
   if (d && isField(d.field)) {
     const corrected = fromDeclared(d.corrected, d.field, th.species.units[d.field]);
     return shift({ [d.field]: corrected });

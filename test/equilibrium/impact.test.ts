@@ -8,8 +8,9 @@ import { reactionFromEquation, resolveReactions } from '../../pipeline/equilibri
 import { uncertaintyRanking } from '../../pipeline/equilibrium/uncertainty.js';
 import { parseFormula } from '../../pipeline/chemistry/formula.js';
 import { DEFAULT_TOLERANCES } from '../../pipeline/options.js';
+import { rule as gasBounds } from '../../pipeline/rules/cp-gas-bounds.js';
 import { rule as gibbsHelmholtz } from '../../pipeline/rules/gibbs-helmholtz.js';
-import type { CheckContext, Finding, Species } from '../../pipeline/types.js';
+import type { CheckContext, CpSpec, Finding, Species } from '../../pipeline/types.js';
 import { species } from './helpers.js';
 import { publishedSpecies, REFERENCE } from './published-data.js';
 
@@ -133,6 +134,30 @@ describe('impact of findings', () => {
     const dS = b * (T - 1000) - 1000 * b * Math.log(T / 1000);
     expect(fx[0]!.impact![0]!.T_K).toBe(1500);
     expect(fx[0]!.impact![0]!.maxAbsDeltaLnK).toBeCloseTo(Math.abs(dH - T * dS) / (R * T), 10);
+  });
+
+  test('a Cp unit slip: the ln K difference between the curve as given and the curve with the unit corrected', () => {
+    // H2's NASA-7 low-range Cp/R polynomial (GRI-Mech 3.0 thermo data, 200–1000 K, from memory) copied
+    // into a poly row declared in J/(mol K): every Cp is R times too small.
+    const a = [2.34433112, 7.98052075e-3, -1.9478151e-5, 2.01572094e-8, -7.37611761e-12];
+    const h2 = (unit: 'J/(mol K)' | 'R'): Species => {
+      const base = publishedSpecies().find((s) => s.name === 'H2')!;
+      const cp: CpSpec = { model: 'poly', coeffs: a, exponents: [0, 1, 2, 3, 4], unit, unitFactor: unit === 'R' ? R : 1, Tmin: 200, Tmax: 1000, location: { file: 'species.csv', line: 7 } };
+      return { ...base, cp: [cp] };
+    };
+    const slipped = publishedSpecies().map((s) => (s.name === 'H2' ? h2('J/(mol K)') : s));
+    const fixed = publishedSpecies().map((s) => (s.name === 'H2' ? h2('R') : s));
+    const findings = gasBounds.check!(slipped.find((s) => s.name === 'H2')!, ctx);
+    expect(findings.map((f) => [f.messageId, f.diagnosis?.cause])).toEqual([['belowDiagnosed', 'cp-over-R-as-J']]);
+    const temps = [298.15, 500, 800, 1000, 1200];
+    impactOfFindings(findings, [resolved(slipped, WGS, temps)]);
+    const a0 = computeReaction(resolved(slipped, WGS, temps), temps);
+    const b0 = computeReaction(resolved(fixed, WGS, temps), temps);
+    const diffs = a0.map((p, i) => Math.abs(p.lnK! - b0[i]!.lnK!));
+    const worst = Math.max(...diffs);
+    expect(worst).toBeGreaterThan(1); // far more than any stated uncertainty would give
+    expect(findings[0]!.impact).toEqual([{ reaction: 'wgs', maxAbsDeltaLnK: expect.any(Number), T_K: temps[diffs.indexOf(worst)] }]);
+    expect(findings[0]!.impact![0]!.maxAbsDeltaLnK).toBeCloseTo(worst, 9);
   });
 
   test('a Gibbs–Helmholtz residual without a diagnosis: the residual moved through each value used, largest kept', () => {
