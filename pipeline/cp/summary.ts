@@ -5,7 +5,7 @@ import type { CpSummary, Species, UseWindow } from '../types.js';
 import { T_REF_K } from './constants.js';
 import { speciesCp } from './curve-cache.js';
 
-/** Points in the sampled curve, spread evenly over the union of the fitted ranges and the use window. */
+/** Points in the sampled curve, spread evenly from 298.15 K over the fitted ranges and the use window (the range ends are added). */
 export const SUMMARY_SAMPLES = 40;
 
 const r6 = (x: number): number => Number(x.toPrecision(6));
@@ -30,12 +30,16 @@ export function cpSummary(sp: Species, useWindow: UseWindow, withSamples: boolea
     atWindow,
   };
   if (withSamples) {
-    const lo = Math.min(curve.Tmin, ...windowTs);
+    // from 298.15 K, where the H and S integrals start, so a range that begins above it shows the
+    // extrapolated stretch the integrals run through; every range end is a sample, so the chart
+    // changes from fitted to extrapolated exactly where the fitted range ends
+    const lo = Math.min(curve.Tmin, T_REF_K, ...windowTs);
     const hi = Math.max(curve.Tmax, ...windowTs);
-    const Ts: number[] = [];
-    for (let i = 0; i < SUMMARY_SAMPLES; i++) Ts.push(lo + ((hi - lo) * i) / (SUMMARY_SAMPLES - 1));
-    Ts[SUMMARY_SAMPLES - 1] = hi;
-    summary.samples = Ts.map((T) => point(r6(T)));
+    const Ts = new Set<number>();
+    for (let i = 0; i < SUMMARY_SAMPLES - 1; i++) Ts.add(r6(lo + ((hi - lo) * i) / (SUMMARY_SAMPLES - 1)));
+    Ts.add(r6(hi));
+    for (const s of specs) for (const t of [s.Tmin, s.Tmax]) if (t >= lo && t <= hi) Ts.add(r6(t));
+    summary.samples = [...Ts].sort((a, b) => a - b).map(point);
   }
   return summary;
 }

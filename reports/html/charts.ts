@@ -63,15 +63,17 @@ export function cpChartSpec(sp: SpeciesSummary, useWindow: UseWindow | undefined
   if (!samples || samples.length < 2) return undefined;
   const win = windowSpan(useWindow);
   const ranges = sp.cp?.ranges ?? [];
-  // consecutive samples of one kind form a run; neighbouring runs share their boundary sample so the curve is unbroken
+  // consecutive samples of one kind form a run; neighbouring runs share their boundary sample so the
+  // curve is unbroken, and the step between a fitted and an extrapolated sample belongs to the
+  // extrapolated (dashed) run: the fitted range's own end sample is where the dashes start or stop
   const curve: { T: number; cp: number; kind: string; run: number }[] = [];
   let run = 0;
   samples.forEach((p, i) => {
     const kind = p.outsideK > 0 ? CP_EXTRA : CP_FIT;
     const prev = samples[i - 1];
     if (prev && (prev.outsideK > 0 ? CP_EXTRA : CP_FIT) !== kind) {
-      run++;
-      curve.push({ T: prev.T, cp: prev.cp, kind, run });
+      if (kind === CP_EXTRA) curve.push({ T: prev.T, cp: prev.cp, kind, run: ++run });
+      else curve.push({ T: p.T, cp: p.cp, kind: CP_EXTRA, run: run++ });
     }
     curve.push({ T: p.T, cp: p.cp, kind, run });
   });
@@ -208,6 +210,9 @@ const LNK_SHORT = 'ln K, constant-ΔrH° shortcut';
 const LNK_EXTRA = 'Cp of a species extrapolated here';
 const LNK_BAND = '± u(ln K)';
 
+/** Height of the ln K plot area, px. */
+export const LNK_HEIGHT = 240;
+
 /** ln K against T for one reaction: rigorous and shortcut routes, the ±u band, extrapolated points marked. */
 export function lnKChartSpec(r: ReactionResult): TopLevelSpec | undefined {
   const pts = r.points.filter((p) => Number.isFinite(p.lnK) && Number.isFinite(p.T));
@@ -233,7 +238,7 @@ export function lnKChartSpec(r: ReactionResult): TopLevelSpec | undefined {
     description: `ln K against temperature for reaction ${r.id}`,
     config: CONFIG,
     width: 520,
-    height: 240,
+    height: LNK_HEIGHT,
     layer: [
       ...(band.length
         ? [{ data: { values: band }, mark: { type: 'area' as const, opacity: 0.3 }, encoding: { x, y: { ...y, field: 'lo' }, y2: { field: 'hi' }, color } }]

@@ -7,7 +7,7 @@ import { RULES } from '../../pipeline/rules/index.js';
 import { failingCount } from '../../pipeline/verdict.js';
 import { CHART_SPECIES_LIMIT, type FailOn, type Finding, type ReactionResult, type Report, type SpeciesSummary } from '../../pipeline/types.js';
 import { impactOf, rankFindings } from '../terminal.js';
-import { chartKey, cpChartSpec, gibbsChartSpec, lnKChartSpec, renderSvg, speciesLabel, windowSpan, type Tolerance } from './charts.js';
+import { chartKey, cpChartSpec, gibbsChartSpec, LNK_HEIGHT, lnKChartSpec, renderSvg, speciesLabel, windowSpan, type Tolerance } from './charts.js';
 import { esc } from './escape.js';
 import { CSS } from './style.js';
 
@@ -257,7 +257,7 @@ export async function renderHtml(report: Report, opts: HtmlOptions = {}): Promis
       out.push(`<h3 id="rx-${i + 1}">${esc(r.id)}: <span class="mono">${esc(r.equation)}</span></h3>`);
       out.push(`<p class="meta">defined at ${esc(r.file)}:${r.line}${r.balanced ? '' : ' · <strong>not balanced</strong> in elements or charge'}</p>`);
       const svg = svgs.get(`reaction:${i}`);
-      if (svg) out.push(figure(svg, `ln K against temperature for ${r.id}`, `ln K against T for ${esc(r.id)}.`, 'lnK'));
+      if (svg) out.push(figure(svg, `ln K against temperature for ${r.id}`, lnKCaption(r), 'lnK'));
       else out.push('<p class="note">No finite ln K to draw.</p>');
       out.push(reactionTable(r));
       if (r.uncertaintyRanking?.length) {
@@ -293,12 +293,33 @@ export async function renderHtml(report: Report, opts: HtmlOptions = {}): Promis
   return out.join('\n');
 }
 
+/** Band narrower than this on the page (px, full height) reads as part of the lines. */
+const BAND_VISIBLE_PX = 4;
+
+/** What the ln K chart's band holds, and a word when it is too thin to see at the chart's scale. */
+export function lnKCaption(r: ReactionResult): string {
+  const fin = (x: number | undefined): x is number => typeof x === 'number' && Number.isFinite(x);
+  const pts = r.points.filter((p) => fin(p.lnK));
+  const us = pts.map((p) => p.u_lnK).filter((u): u is number => fin(u) && u > 0);
+  const head = `ln K against T for ${esc(r.id)}.`;
+  if (us.length === 0) return `${head} No band: no stated uncertainty reaches this reaction's ln K.`;
+  const ys = pts.flatMap((p) => [p.lnK, p.lnKShortcut, ...(fin(p.u_lnK) ? [p.lnK - p.u_lnK, p.lnK + p.u_lnK] : [])]).filter(fin);
+  const span = Math.max(...ys) - Math.min(...ys);
+  const uMin = Math.min(...us);
+  const uMax = Math.max(...us);
+  const band = `Band: ± u(ln K), ${uMin === uMax ? n(Number(uMax.toPrecision(2))) : `${n(Number(uMin.toPrecision(2)))} to ${n(Number(uMax.toPrecision(2)))}`}`;
+  const thin = span > 0 && ((2 * uMax) / span) * LNK_HEIGHT < BAND_VISIBLE_PX;
+  return `${head} ${band}${thin ? '; at this scale the band is narrower than the lines (u(ln K) per temperature is in the table below)' : ''}.`;
+}
+
 function cpCaption(s: SpeciesSummary): string {
   const cp = s.cp!;
   const ranges = cp.ranges.map((r) => `${esc(r.model)} ${n(r.Tmin)}–${n(r.Tmax)} K (${esc(r.file)}:${r.line})`).join('; ');
   const outside = cp.atWindow.filter((w) => w.outsideK > 0);
+  const below = cp.ranges.length ? Math.min(...cp.ranges.map((r) => r.Tmin)) - 298.15 : 0;
   return (
     `Fitted ranges: ${ranges || 'none'}. Cp(298.15 K) = ${n(cp.cp298, 'J/(mol K)')}.` +
+    (below > 0 ? ` 298.15 K is ${n(Number(below.toFixed(2)))} K below the fitted ranges: H and S are integrated from there through the extrapolated correlation (dashed).` : '') +
     (outside.length ? ` Extrapolated in the use window: ${outside.map((w) => `${n(w.T)} K is ${n(w.outsideK)} K outside, Cp ${n(w.cp)} J/(mol K)`).join('; ')}.` : '')
   );
 }

@@ -2,7 +2,7 @@
 // (html-browser.test.ts opens it in a real browser.)
 import { describe, expect, it } from 'vitest';
 import { esc } from '../../reports/html/escape.js';
-import { CSP, HTML_FINDINGS_LIMIT, renderHtml } from '../../reports/html/template.js';
+import { CSP, HTML_FINDINGS_LIMIT, lnKCaption, renderHtml } from '../../reports/html/template.js';
 import { cpChartSpec, gibbsChartSpec, lnKChartSpec } from '../../reports/html/charts.js';
 import type { Finding } from '../../pipeline/types.js';
 import { HOSTILE_IMG, HOSTILE_SCRIPT, USE_WINDOW, makeReport } from './fixture.js';
@@ -94,6 +94,34 @@ describe('chart specifications', () => {
     expect(Math.max(...extra.map((p) => p.T))).toBe(1500);
     expect(new Set(curve.map((p) => p.run)).size).toBe(2);
     expect(spec.vconcat[0].layer[0].data.values[0]).toMatchObject({ lo: 400, hi: 1400 });
+  });
+
+  it('Cp: a fitted range that starts above the first sample is dashed up to its own start, solid from there', () => {
+    const sp = structuredClone(makeReport().species![2]!);
+    sp.cp!.ranges = [{ ...sp.cp!.ranges[0]!, Tmin: 500, Tmax: 1500 }];
+    sp.cp!.samples = [300, 400, 500, 600, 700].map((T) => ({ T, cp: 40 + T / 100, outsideK: Math.max(0, 500 - T) }));
+    const spec = cpChartSpec(sp, USE_WINDOW) as any;
+    const curve = spec.vconcat[0].layer[1].data.values as { T: number; kind: string; run: number }[];
+    const dashed = curve.filter((p) => p.kind.includes('extrapolated')).map((p) => p.T);
+    const solid = curve.filter((p) => !p.kind.includes('extrapolated')).map((p) => p.T);
+    expect(dashed).toEqual([300, 400, 500]); // the step 400 -> 500 K lies outside the fitted range
+    expect(solid).toEqual([500, 600, 700]);
+  });
+
+  it('ln K caption: gives the band\'s size, and says so when the band is too thin to see beside ln K\'s own range', () => {
+    const base = makeReport().reactions![0]!;
+    const pts = (u: number | undefined) => [400, 800, 1200].map((T, i) => ({ ...base.points[0]!, T, lnK: -12 - 4 * i, lnKShortcut: -12 - 4.2 * i, u_lnK: u, extrapolated: [] }));
+    // span about 8.4 in ln K over 240 px: ±0.05 is under 3 px high, ±1 is 57 px
+    expect(lnKCaption({ ...base, points: pts(0.05) })).toMatch(/Band: ± u\(ln K\), 0\.05; at this scale the band is narrower than the lines/);
+    expect(lnKCaption({ ...base, points: pts(1) })).toMatch(/Band: ± u\(ln K\), 1\.$/);
+    expect(lnKCaption({ ...base, points: pts(undefined) })).toMatch(/No band/);
+  });
+
+  it('Cp caption: a fitted range that starts above 298.15 K is named as an extrapolation the integrals run through', async () => {
+    // the fixture's H2O is fitted from 500 K (NIST's Shomate range); CO, CO2 and H2 from 298 K
+    const html = await renderHtml(makeReport());
+    expect(html).toContain('298.15 K is 201.85 K below the fitted ranges: H and S are integrated from there');
+    expect(html.match(/below the fitted ranges/g)).toHaveLength(1);
   });
 
   it('no chart without data: no samples, no residuals, no finite ln K', () => {

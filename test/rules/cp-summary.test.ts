@@ -33,12 +33,18 @@ describe('cpSummary', () => {
     expect(s.samples).toBeUndefined();
   });
 
-  it('samples span the union of the fitted ranges and the use window', () => {
-    const s = cpSummary(species(SHOMATE.H2O, 'H2O'), { Tmin: 300, Tmax: 1500 }, true)!;
-    expect(s.samples).toHaveLength(SUMMARY_SAMPLES);
-    expect(s.samples![0]).toMatchObject({ T: 300, outsideK: 200 }); // NIST's fit starts at 500 K
-    expect(s.samples![SUMMARY_SAMPLES - 1].T).toBe(6000);
-    expect(s.samples!.every((p, i) => i === 0 || p.T > s.samples![i - 1].T)).toBe(true);
+  it('samples span 298.15 K, the fitted ranges and the use window, with every range end among them', () => {
+    const s = cpSummary(species(SHOMATE.H2O, 'H2O'), { Tmin: 400, Tmax: 1500 }, true)!;
+    const Ts = s.samples!.map((p) => p.T);
+    expect(Ts.length).toBeGreaterThanOrEqual(SUMMARY_SAMPLES);
+    // NIST's fit starts at 500 K; H and S are integrated from 298.15 K through the extrapolated stretch,
+    // so the chart starts there even though the use window starts at 400 K
+    expect(s.samples![0]).toMatchObject({ T: 298.15, outsideK: 201.85 });
+    expect(Ts[Ts.length - 1]).toBe(6000);
+    for (const r of s.ranges) expect(Ts).toContain(r.Tmin);
+    expect(Ts).toContain(1700);
+    expect(s.samples!.find((p) => p.T === 500)!.outsideK).toBe(0);
+    expect(Ts.every((T, i) => i === 0 || T > Ts[i - 1]!)).toBe(true);
     expect(s.samples!.filter((p) => p.outsideK > 0).every((p) => p.T < 500)).toBe(true);
   });
 
