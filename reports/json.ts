@@ -3,9 +3,10 @@
 // A report of 10^6 rows holds 10^5–10^6 species summaries: as one string it would cost a few hundred
 // MB at once. `jsonChunks` yields the same bytes as `renderJson` piece by piece (a few hundred array elements at a
 // time), and `writeJson` writes them to disk atomically without ever holding the whole text.
-import { closeSync, mkdirSync, openSync, renameSync, rmSync, writeSync } from 'node:fs';
+import { closeSync, openSync, renameSync, rmSync, writeSync } from 'node:fs';
 import { basename, dirname, join } from 'node:path';
 import { InputError } from '../pipeline/errors.js';
+import { makeDirs } from './write.js';
 import type { Report } from '../pipeline/types.js';
 
 export function renderJson(report: Report): string {
@@ -58,7 +59,7 @@ export function writeJson(path: string, report: Report): void {
   const tmp = join(dir, `.${basename(path)}.${process.pid}.tmp`);
   let fd: number | undefined;
   try {
-    mkdirSync(dir, { recursive: true });
+    makeDirs(dir);
     fd = openSync(tmp, 'w');
     let buf = '';
     for (const piece of jsonChunks(report)) {

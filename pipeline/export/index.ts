@@ -8,12 +8,12 @@
 //    (duplicate-row) are always left out: the canonical file holds each row once.
 // 3. Read the tables again through ingestTable (check() keeps no rows) and write each kept row as it
 //    comes, to a temporary file renamed into place at the end (a killed run leaves no half file).
-import { closeSync, fsyncSync, mkdirSync, openSync, renameSync, rmSync, writeSync } from 'node:fs';
+import { closeSync, fsyncSync, openSync, renameSync, rmSync, writeSync } from 'node:fs';
 import { createHash } from 'node:crypto';
 import { basename, dirname, join, resolve } from 'node:path';
 import { renderJson } from '../../reports/json.js';
 import { inert } from '../../reports/terminal.js';
-import { writeAtomic } from '../../reports/write.js';
+import { makeDirs, writeAtomic } from '../../reports/write.js';
 import { check } from '../check.js';
 import { loadReference } from '../chemistry/reference.js';
 import { withDatasetFindings } from '../diff/index.js';
@@ -102,7 +102,7 @@ class AtomicWriter {
   constructor(readonly path: string) {
     this.tmp = join(dirname(path), `.${basename(path)}.${process.pid}.tmp`);
     try {
-      mkdirSync(dirname(path), { recursive: true });
+      makeDirs(dirname(path));
       this.fd = openSync(this.tmp, 'w');
     } catch (e) {
       throw new InputError('unwritable-output', `cannot write the export (${(e as NodeJS.ErrnoException).code ?? 'error'})`, { file: path });

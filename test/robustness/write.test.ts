@@ -39,6 +39,14 @@ describe('writeAtomic', () => {
     expect(readFileSync(file, 'utf8')).toBe('x');
   });
 
+  it('a missing directory under /proc is an InputError at once, not an endless mkdir (Node recursive mkdir loops there)', () => {
+    // Linux only: /proc refuses mkdir with ENOENT although /proc exists
+    const target = '/proc/thermovet-no-such-dir/sub/r.json';
+    const e = thrown(() => writeAtomic(target, 'report'));
+    expect(e).toBeInstanceOf(InputError);
+    expect((e as InputError).describe()).toContain(target);
+  });
+
   it('a directory as the target is refused and keeps no partial file', () => {
     const target = join(dir, 'isdir');
     writeAtomic(join(target, 'inner.json'), '1');
