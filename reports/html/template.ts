@@ -80,8 +80,13 @@ function findingRow(f: Finding): string {
   let cell = esc(f.message);
   const d = f.diagnosis;
   if (d) {
-    const after = `${n(Number(d.residualAfter.toPrecision(3)))}${f.rule === 'gibbs-helmholtz' ? ' kJ/mol' : ''}`;
-    cell += `<span class="diag">${esc(d.cause)} in ${esc(d.field)}; the corrected value ${n(d.corrected, d.unit)} leaves a residual of ${after}.</span>`;
+    if (d.cause === 'odd-source') {
+      // the median is a consensus, not a corrected value that leaves a residual
+      cell += `<span class="diag">${esc(d.cause)} in ${esc(d.field)}; the median of all the sources is ${n(d.corrected, d.unit)}.</span>`;
+    } else {
+      const after = `${n(Number(d.residualAfter.toPrecision(3)))}${f.rule === 'gibbs-helmholtz' ? ' kJ/mol' : ''}`;
+      cell += `<span class="diag">${esc(d.cause)} in ${esc(d.field)}; the corrected value ${n(d.corrected, d.unit)} leaves a residual of ${after}.</span>`;
+    }
   }
   const impact = impactOf(f);
   if (impact > 0) {

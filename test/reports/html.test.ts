@@ -124,6 +124,16 @@ describe('chart specifications', () => {
     expect(html.match(/below the fitted ranges/g)).toHaveLength(1);
   });
 
+  it('an odd source\'s diagnosis reads as the median of the sources, not as a correction leaving a residual', async () => {
+    const r = makeReport();
+    const f = r.findings.find((x) => x.diagnosis)!;
+    f.rule = 'cross-source';
+    f.diagnosis = { cause: 'odd-source', field: 'S', corrected: 213.79, unit: 'J/(mol K)', residualAfter: 0 };
+    const html = await renderHtml(r);
+    expect(html).toContain('odd-source in S; the median of all the sources is 213.79 J/(mol K).');
+    expect(html).not.toMatch(/odd-source[^<]*leaves a residual/);
+  });
+
   it('no chart without data: no samples, no residuals, no finite ln K', () => {
     const r = makeReport();
     delete r.species![0]!.cp!.samples;
