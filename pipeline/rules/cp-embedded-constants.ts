@@ -181,7 +181,7 @@ rule.check = (sp: Species, ctx): Finding[] => {
     const show = (x: number): number => (kJ ? r(x / 1000) : r(x));
     const base = { model, implied: show(c.implied), row: show(c.row), diff: kJ ? r(diff / 1000, 4) : r(diff, 4), tol: show(severity === 'error' ? c.error : c.warn), extrapolated: extraText };
     const constSlip = bestSlip(c.implied, (x) => x - c.row, c.warn, c.field);
-    const rowSlip = bestSlip(c.row, (x) => c.implied - x, c.warn, c.field);
+    const rowSlip = bestSlip(c.row, (x) => c.implied - x, c.warn, c.field, sp.units[c.field]);
     const rowBad = rowCloses(sp, row, ctx) === false;
     const rowFixed = rowSlip ? rowCloses(sp, row, ctx, { field: c.field, value: rowSlip.corrected }) : undefined;
     const blameRow = rowSlip && rowBad && rowFixed !== false ? rowSlip : undefined;
@@ -218,13 +218,14 @@ function shomateS(spec: CpSpec): { S: (T: number) => number } {
 
 /**
  * The slip (slips.ts) that, applied to `value`, brings |residual(corrected)| lowest and within
- * `within`, described in the words of `field`'s kind of unit.
+ * `within`, described in terms of `declared` (the row's unit for the field; the canonical unit when absent).
  */
 function bestSlip(
   value: number,
   residual: (corrected: number) => number,
   within: number,
   field: 'dHf' | 'S' = 'dHf',
+  declared?: string,
 ): { cause: string; words: string; corrected: number; after: number } | undefined {
   let best: { cause: string; words: string; corrected: number; after: number } | undefined;
   for (const slip of SLIPS) {
@@ -234,7 +235,7 @@ function bestSlip(
     if (corrected === value) continue;
     const after = residual(corrected);
     if (Math.abs(after) <= within && (!best || Math.abs(after) < Math.abs(best.after))) {
-      best = { cause: slip.cause, words: slip.words(field), corrected, after };
+      best = { cause: slip.cause, words: slip.words(field, declared), corrected, after };
     }
   }
   return best;

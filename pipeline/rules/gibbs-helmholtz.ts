@@ -66,7 +66,7 @@ rule.check = (sp: Species, ctx: CheckContext): Finding[] => {
     }
     const unit = sp.units[fit.field] ?? '';
     const corrected = toDeclared(fit.correctedSI, fit.field, unit);
-    const params = { ...base, field: fit.field, words: fit.slip.words(fit.field), corrected: Number(corrected.toPrecision(6)), unit, residualAfter: kJ3(fit.residualAfterJ) };
+    const params = { ...base, field: fit.field, words: fit.slip.words(fit.field, unit), corrected: Number(corrected.toPrecision(6)), unit, residualAfter: kJ3(fit.residualAfterJ) };
     findings.push(
       makeFinding(rule, 'diagnosed', params, { ...row.location, column: sp.columns[fit.field], field: fit.field }, {
         ...ids,

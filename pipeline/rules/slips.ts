@@ -5,8 +5,8 @@ import type { Phase } from '../types.js';
 
 export interface Slip {
   cause: string;
-  /** words for messages: "{field} looks like …", in the field's own kind of unit */
-  words(field: 'dHf' | 'dGf' | 'S'): string;
+  /** words for messages: "{field} looks like …", in terms of the unit declared for the field */
+  words(field: 'dHf' | 'dGf' | 'S', declared?: string): string;
   /** the value it should have been, from the value as given (SI) */
   correct(valueSI: number, phase: Phase): number;
   fields: readonly ('dHf' | 'dGf' | 'S')[];
@@ -14,16 +14,45 @@ export interface Slip {
 
 const ALL = ['dHf', 'dGf', 'S'] as const;
 
-/** "kcal/mol" for an energy, "cal/(mol K)" for an entropy. */
-function e(field: 'dHf' | 'dGf' | 'S', energyPrefix: string, entropyPrefix = energyPrefix.replace(/^k/, '')): string {
-  return field === 'S' ? `${entropyPrefix}/(mol K)` : `${energyPrefix}/mol`;
-}
+/** The declared unit, or the column's default when the table declares none. */
+const unitOf = (field: 'dHf' | 'dGf' | 'S', declared?: string): string => declared || (field === 'S' ? 'J/(mol K)' : 'kJ/mol');
+
+/** The unit 1000× smaller (kJ/mol -> J/mol, kcal/mol -> cal/mol, J/(mol K) -> mJ/(mol K)). */
+const thousandth = (u: string): string => (u.startsWith('k') ? u.slice(1) : `m${u}`);
+/** The unit 1000× larger (J/mol -> kJ/mol, cal/(mol K) -> kcal/(mol K), kJ/mol -> MJ/mol). */
+const thousandfold = (u: string): string => (u.startsWith('k') ? `M${u.slice(1)}` : `k${u}`);
 
 export const SLIPS: readonly Slip[] = [
-  { cause: 'J-read-as-kJ', words: (f) => `${e(f, 'J')} entered where ${e(f, 'kJ')} was declared (1000× too large)`, correct: (v) => v / 1000, fields: ALL },
-  { cause: 'kJ-read-as-J', words: (f) => `${e(f, 'kJ')} entered where ${e(f, 'J')} was declared (1000× too small)`, correct: (v) => v * 1000, fields: ALL },
-  { cause: 'cal-read-as-J', words: (f) => `${e(f, 'kcal', 'cal')} read as ${e(f, 'kJ', 'J')} (4.184× too small)`, correct: (v) => v * CAL_J, fields: ALL },
-  { cause: 'J-read-as-cal', words: (f) => `${e(f, 'kJ', 'J')} read as ${e(f, 'kcal', 'cal')} (4.184× too large)`, correct: (v) => v / CAL_J, fields: ALL },
+  {
+    cause: 'J-read-as-kJ',
+    words: (f, d) => `${thousandth(unitOf(f, d))} entered where ${unitOf(f, d)} was declared (1000× too large)`,
+    correct: (v) => v / 1000,
+    fields: ALL,
+  },
+  {
+    cause: 'kJ-read-as-J',
+    words: (f, d) => `${thousandfold(unitOf(f, d))} entered where ${unitOf(f, d)} was declared (1000× too small)`,
+    correct: (v) => v * 1000,
+    fields: ALL,
+  },
+  {
+    cause: 'cal-read-as-J',
+    words: (f, d) => {
+      const u = unitOf(f, d);
+      return u.includes('cal') ? `a value 4.184× too small for ${u}` : `${u.replace('J', 'cal')} read as ${u} (4.184× too small)`;
+    },
+    correct: (v) => v * CAL_J,
+    fields: ALL,
+  },
+  {
+    cause: 'J-read-as-cal',
+    words: (f, d) => {
+      const u = unitOf(f, d);
+      return u.includes('cal') ? `${u.replace('cal', 'J')} read as ${u} (4.184× too large)` : `a value 4.184× too large for ${u}`;
+    },
+    correct: (v) => v / CAL_J,
+    fields: ALL,
+  },
   { cause: 'sign', words: () => 'a sign slip', correct: (v) => -v, fields: ALL },
   {
     // a gas entropy on the old 1 atm standard state is lower by R ln(1.01325/1) than on the 1 bar state

@@ -69,6 +69,25 @@ describe('slip diagnosis on real species', () => {
     expect(f.diagnosis!.corrected).toBeCloseTo(-228.582 / 4.184, 6);
   });
 
+  it('words the slip in the declared unit, not in kJ/mol and J/(mol K) always', async () => {
+    // H2O(g) CODATA 1989 and CH4(g) NIST-JANAF 1998 (test/rules/published.ts), in a kcal/mol, cal/(mol K) table:
+    // H2O's ΔfH° typed in cal/mol (1000× too large), CH4's S° typed in kcal/(mol K) (1000× too small)
+    const water = PUBLISHED[0]!;
+    const csv =
+      'species,phase,dHf [kcal/mol],dGf [kcal/mol],S [cal/(mol K)]\n' +
+      `H2O,g,${(water.dHf * 1000) / 4.184},${water.dGf / 4.184},${water.S / 4.184}\n` +
+      `CH4,g,${-74.873 / 4.184},${-50.768 / 4.184},${186.251 / 4.184 / 1000}\n`;
+    const report = await run(csv);
+    const gh = report.findings.filter((f) => f.rule === 'gibbs-helmholtz');
+    expect(gh.map((f) => [f.location.line, f.diagnosis?.cause, f.params.words])).toEqual([
+      [2, 'J-read-as-kJ', 'cal/mol entered where kcal/mol was declared (1000× too large)'],
+      [3, 'kJ-read-as-J', 'kcal/(mol K) entered where cal/(mol K) was declared (1000× too small)'],
+    ]);
+    // and a joule column given calories says "cal/mol read as J/mol", not "kcal/mol read as kJ/mol"
+    const joules = await run(`species,phase,dHf [J/mol],dGf [J/mol],S\nCO2,g,${-393522 / 4.184},-394389,213.795\n`);
+    expect(joules.findings.find((f) => f.rule === 'gibbs-helmholtz')!.params.words).toBe('cal/mol read as J/mol (4.184× too small)');
+  });
+
   it('uses stated uncertainties to widen the tolerance', async () => {
     const water = PUBLISHED[0]!;
     // a 0.8 kJ/mol residual: an error with no uncertainty, but within 2·u when u(ΔfG°) = 0.5 kJ/mol
