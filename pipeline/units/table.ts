@@ -67,6 +67,8 @@ const aliases: Record<string, string> = {
   '°c': 'degC',
   'c': 'degC',
   'celsius': 'degC',
+  '℃': 'degC',
+  'e.u.': 'cal/(mol K)',
   'bar': 'bar',
   'atm': 'atm',
   'pa': 'Pa',
@@ -81,9 +83,42 @@ export function unitKey(text: string): string {
   return text.trim().toLowerCase().replace(/\s+/g, '').replace(/⋅/g, '·');
 }
 
+const ENERGY: Record<string, string> = { j: 'J', kj: 'kJ', cal: 'cal', kcal: 'kcal' };
+const FACTOR = /(kcal|cal|kj|j|mol|k)(-1)?/y;
+
+/**
+ * The canonical name of a per-mole energy or entropy written as a product of factors, as tables and
+ * papers print them: `kJ mol-1`, `kJ·mol⁻¹`, `J K^-1 mol^-1`, `J/mol·K`, `cal/mol-K`, `J/(K mol)`.
+ * Everything after the first `/` is the denominator (`J/mol·K` is J/(mol K), as engineers mean it).
+ * Undefined unless it is exactly one of J, kJ, cal, kcal over mol, or over mol and K.
+ */
+function molarUnit(text: string): string | undefined {
+  const t = text.trim().toLowerCase().replace(/⁻¹/g, '-1').replace(/[−–]/g, '-').replace(/\^/g, '').replace(/mole/g, 'mol');
+  const slash = t.indexOf('/');
+  const parts = slash < 0 ? [[t, 1]] as const : ([[t.slice(0, slash), 1], [t.slice(slash + 1).replace(/\//g, ' '), -1]] as const);
+  const powers = new Map<string, number>();
+  for (const [part, side] of parts) {
+    // separators between factors; a hyphen joins factors only between letters (mol-K), never before 1
+    const p = part.replace(/[\s·.*()]+/g, '').replace(/([a-z])-(?=[a-z])/g, '$1');
+    FACTOR.lastIndex = 0;
+    while (FACTOR.lastIndex < p.length) {
+      const m = FACTOR.exec(p);
+      if (!m) return undefined;
+      const power = side * (m[2] ? -1 : 1);
+      powers.set(m[1]!, (powers.get(m[1]!) ?? 0) + power);
+    }
+  }
+  const energies = [...powers].filter(([f]) => f in ENERGY);
+  if (energies.length !== 1 || energies[0]![1] !== 1 || powers.get('mol') !== -1) return undefined;
+  const kelvin = powers.get('k') ?? 0;
+  if (kelvin !== 0 && kelvin !== -1) return undefined;
+  if (powers.size !== (kelvin ? 3 : 2)) return undefined;
+  return `${ENERGY[energies[0]![0]]}/${kelvin ? '(mol K)' : 'mol'}`;
+}
+
 /** Find a unit of the given dimension by any accepted spelling; undefined when unknown or of another dimension. */
 export function findUnit(text: string, dimension: Dimension): UnitDef | undefined {
-  const canonical = aliases[unitKey(text)];
+  const canonical = aliases[unitKey(text)] ?? molarUnit(text);
   if (canonical === undefined) return undefined;
   return defs.find((d) => d.name === canonical && d.dimension === dimension);
 }

@@ -36,6 +36,19 @@ describe('unit table', () => {
     expect(findUnit('KCAL/MOL', 'molar-energy')?.name).toBe('kcal/mol');
   });
 
+  it('reads per-mole units written as products of factors, as tables and papers print them', () => {
+    for (const s of ['kJ mol-1', 'kJ·mol⁻¹', 'kJ mol^-1', 'kJ/mole', 'kJ mol−1']) expect(findUnit(s, 'molar-energy')?.name, s).toBe('kJ/mol');
+    expect(findUnit('kcal mol-1', 'molar-energy')?.name).toBe('kcal/mol');
+    for (const s of ['J mol-1 K-1', 'J K-1 mol-1', 'J/mol·K', 'J/mol-K', 'J/K/mol', 'J/(K·mol)', 'J·mol⁻¹·K⁻¹', 'J/(mole K)'])
+      expect(findUnit(s, 'molar-entropy')?.name, s).toBe('J/(mol K)');
+    for (const s of ['cal mol-1 K-1', 'cal/mol-K', 'cal/K/mol', 'e.u.']) expect(findUnit(s, 'molar-entropy')?.name, s).toBe('cal/(mol K)');
+    expect(findUnit('℃', 'temperature')?.name).toBe('degC');
+    // a product that is not energy per mole (per kelvin) stays unknown
+    for (const s of ['kJ', 'mol-1', 'J mol', 'J/mol K-1', 'J/(mol K K)', 'J mol-1 mol-1', 'kcal/(mol K)', 'J/mol·K·s', '1/K'])
+      expect([findUnit(s, 'molar-energy'), findUnit(s, 'molar-entropy')], s).toEqual([undefined, undefined]);
+    expect(findUnit('kJ mol-1', 'molar-entropy')).toBeUndefined();
+  });
+
   it('refuses unknown units and units of another dimension', () => {
     expect(findUnit('furlongs', 'molar-energy')).toBeUndefined();
     expect(findUnit('kJ/mol', 'temperature')).toBeUndefined();
