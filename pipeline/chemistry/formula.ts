@@ -352,6 +352,9 @@ function readBareCharge(rest: string, sign: 1 | -1, at: number, text: string): C
       at + m.index,
       text,
     );
+  // a coordination entity's charge follows its square bracket: [Fe(H2O)6]3+ is Fe(H2O)6 with charge +3,
+  // never three of them with charge +1 (a count on a round bracket stays a count: Fe(OH)2+)
+  if (head.endsWith(']')) return { body: head, charge: sign * n };
   if (!SINGLE_SYMBOL.test(head) || !isElement(head)) {
     if (digits.length < 2) return undefined; // NH4+, H3O+, SO4-
     const last = digits.slice(-1);

@@ -98,6 +98,12 @@ const cases: [string, Record<string, number>, number][] = [
   ['Cr2O7-2', { Cr: 2, O: 7 }, -2],
   ['Cr2O7^2-', { Cr: 2, O: 7 }, -2],
   ['C10H20+', { C: 10, H: 20 }, 1],
+  // a square-bracketed complex ion: the digits after the bracket are its charge (IUPAC coordination notation)
+  ['[Fe(H2O)6]3+', { Fe: 1, H: 12, O: 6 }, 3],
+  ['[Fe(CN)6]4-', { Fe: 1, C: 6, N: 6 }, -4],
+  ['[Cu(NH3)4]2+', { Cu: 1, N: 4, H: 12 }, 2],
+  ['[Ag(NH3)2]+', { Ag: 1, N: 2, H: 6 }, 1],
+  ['Fe(OH)2+', { Fe: 1, O: 2, H: 2 }, 1], // a round bracket keeps its count: Fe(OH)2⁺
   ['e-', {}, -1],
   ['e−', {}, -1],
   // phase suffixes are stripped
