@@ -85,8 +85,13 @@ export async function check(options: OptionsNormalized, run: RunInfo): Promise<R
     for (const r of eq.resolved) for (const t of r.terms) charted.add(t.thermo.species.key);
   }
   for (const f of findings) if (f.rule.startsWith('cp-') && f.species !== undefined) charted.add(`${f.species}|${f.phase}`);
+  for (const sp of species) {
+    if (charted.size >= CHART_SPECIES_LIMIT) break;
+    if (sp.cp.length > 0) charted.add(sp.key);
+  }
   findings.sort(compareFindings);
-  const chartKeys = new Set([...charted].slice(0, CHART_SPECIES_LIMIT)); // reaction species first, then Cp findings
+  // reaction species first, then those with Cp findings, then the rest with a Cp correlation, in name order
+  const chartKeys = new Set([...charted].slice(0, CHART_SPECIES_LIMIT));
   const inputs = await Promise.all([...options.tables.map((t) => t.path), ...(options.reactionsFile ? [options.reactionsFile] : [])].map((p) => fileDigest(p)));
   // Each species is let go as soon as its summary is made, so the records and the summaries are never
   // both whole in memory (at 10^6 rows each is several hundred MB).

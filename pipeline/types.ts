@@ -215,7 +215,7 @@ export interface CpSummary {
   cp298?: number; // J/(mol K) at 298.15 K (extrapolated when outside every range)
   /** Cp at the use window's ends (and listed temperatures), with kelvin outside the fitted ranges */
   atWindow: { T: number; cp: number; outsideK: number }[];
-  /** a sampled curve for charts, present for at most CHART_SPECIES_LIMIT species (those in reactions first, then those with Cp findings) */
+  /** a sampled curve for charts, present for at most CHART_SPECIES_LIMIT species (those in reactions first, then those with Cp findings, then the rest with a Cp correlation) */
   samples?: { T: number; cp: number; outsideK: number }[];
 }
 
