@@ -50,7 +50,7 @@ rule.check = (sp: Species, ctx: CheckContext): Finding[] => {
   for (const field of ['dHf', 'dGf'] as const) {
     const v = sp[field];
     if (v !== undefined && v === 0) {
-      findings.push(makeFinding(rule, 'zero', { species: sp.name, element, state: `reference: ${stateText}`, field }, at(field), ids));
+      findings.push(makeFinding(rule, 'zero', { species: sp.name, element, state: `the reference is ${ref.species}`, field }, at(field), ids));
     }
   }
   return findings;
