@@ -61,7 +61,7 @@ pre { background: var(--tint); padding: 0.6rem 0.8rem; overflow-x: auto; font-si
 footer { margin-top: 3rem; padding-top: 0.8rem; border-top: 1px solid var(--rule); font-size: 0.88rem; color: var(--muted); }
 table.findings { table-layout: fixed; }
 table.findings col.c-sev { width: 8rem; } table.findings col.c-where { width: 16.5rem; } table.findings col.c-rule { width: 11.5rem; }
-table.findings td.where { white-space: normal; }
+table.findings td.where { white-space: normal; } td.where code { overflow-wrap: break-word; } .nowrap { white-space: nowrap; }
 @media (max-width: 800px) { table.findings { table-layout: auto; } }
 @media print {
   @page { margin: 14mm; }

@@ -74,8 +74,14 @@ function countsBlock(report: Report): string {
 
 const SEV_MARK: Record<string, string> = { error: '■ error', warning: '▲ warning', info: '● info' };
 
+/** file:line:column, breakable only after a slash of the path, never inside ":17:4". */
+function whereHtml(f: Finding): string {
+  const tail = `:${f.location.line}${f.location.column ? `:${f.location.column}` : ''}`;
+  const path = esc(f.location.file).replace(/\//g, '/<wbr>');
+  return `${path}<span class="nowrap">${tail}</span>`;
+}
+
 function findingRow(f: Finding): string {
-  const at = `${f.location.file}:${f.location.line}${f.location.column ? `:${f.location.column}` : ''}`;
   const rule = RULES.find((r) => r.id === f.rule);
   let cell = esc(f.message);
   const d = f.diagnosis;
@@ -98,7 +104,7 @@ function findingRow(f: Finding): string {
   }
   return (
     `<tr class="${f.waived ? 'waived' : ''}"><td><span class="sev ${esc(f.severity)}">${SEV_MARK[f.severity] ?? esc(f.severity)}${f.waived ? ' (waived)' : ''}</span></td>` +
-    `<td class="where"><code>${esc(at)}</code>${f.location.field ? `<br><span class="note">${esc(f.location.field)}</span>` : ''}</td>` +
+    `<td class="where"><code>${whereHtml(f)}</code>${f.location.field ? `<br><span class="note">${esc(f.location.field)}</span>` : ''}</td>` +
     `<td class="rule"><code title="${esc(rule?.description ?? '')}">${esc(f.rule)}</code></td><td>${cell}</td></tr>`
   );
 }

@@ -44,7 +44,8 @@ describe('renderHtml', () => {
 
   it('lists findings grouped by species with file:line:field and the diagnosis; waived ones are marked', async () => {
     const html = await renderHtml(makeReport());
-    expect(html).toContain('datasets/fixture/gases.csv:4:6');
+    expect(html.replace(/<[^>]+>/g, '')).toContain('datasets/fixture/gases.csv:4:6'); // the text, with break points after slashes only
+    expect(html).toContain('gases.csv<span class="nowrap">:4:6</span>');
     expect(html).toMatch(/Diagnosis|class="diag"/);
     expect(html).toContain('cal-read-as-J');
     expect(html).toContain('accepted by A. Reviewer until 2031-12-31');
