@@ -11,7 +11,9 @@
 //      value in a field the route does not read (ΔfG° when ΔfH° and S° are given) moves ln K by 0.
 //      A unit slip in a Cp correlation (diagnosis.field 'cp_unit', from cp-gas-bounds or
 //      cp-solid-bounds): the curve as given against the curve with that range's Cp rescaled by the
-//      slip's factor, both integrated from 298.15 K through the joins.
+//      slip's factor, both integrated from 298.15 K through the joins; a range whose ends were °C
+//      read as K (cause 'degC-read-as-K', a column slip): against the curve with every range of the
+//      species from that file moved up by 273.15 K.
 //   2. A Cp extrapolation (rule ids containing 'extrapolat' or 'coverage'): the rigorous route
 //      against the same curve with Cp frozen at its value at the nearest end of the fitted range
 //      outside it. The spread is how much the answer hangs on the extrapolated polynomial.
@@ -86,19 +88,28 @@ export function frozenDS(c: CpCurve, T: number): number {
 type Effect = (T: number) => number;
 
 /**
- * The species' Cp curve with the range of the finding's row rescaled by the diagnosed unit slip's
- * factor, or undefined when the finding's row holds no poly or table range or the cause is not a
- * unit slip of that range's declared unit.
+ * The species' Cp curve corrected as diagnosed: the finding's range with its Cp rescaled by a unit
+ * slip's factor (diagnosis field cp_unit), or, for °C read as K (field cp_Tmin, a column slip), every
+ * range from the finding's file moved up by 273.15 K. Undefined when the finding's row holds no Cp
+ * range or the cause is neither.
  */
-export function curveWithUnitFix(th: SpeciesThermo, f: Finding): CpCurve | undefined {
+export function curveWithCpFix(th: SpeciesThermo, f: Finding): CpCurve | undefined {
   const cause = f.diagnosis?.cause;
   const specs = th.species.cp.slice().sort((a, b) => a.Tmin - b.Tmin || a.Tmax - b.Tmax);
   const at = (s: CpSpec): boolean => s.location.file === f.location.file && s.location.line === f.location.line;
   const target = specs.find(at);
-  const slip = target ? cpUnitSlips(target).find((x) => x.cause === cause) : undefined;
-  if (!target || !slip) return undefined;
+  if (!target) return undefined;
+  let fix: ((s: CpSpec) => CpSpec) | undefined;
+  if (cause === 'degC-read-as-K') {
+    // a column slip: every range of the species from the same file moves with the flagged one
+    fix = (s) => (s.location.file === target.location.file ? { ...s, Tmin: s.Tmin + 273.15, Tmax: s.Tmax + 273.15 } : s);
+  } else {
+    const slip = cpUnitSlips(target).find((x) => x.cause === cause);
+    if (slip) fix = (s) => (s === target ? { ...s, unitFactor: s.unitFactor * slip.factor } : s);
+  }
+  if (!fix) return undefined;
   try {
-    return buildCurve(specs.map((s) => buildSegment(s === target ? { ...s, unitFactor: s.unitFactor * slip.factor } : s)));
+    return buildCurve(specs.map((s) => buildSegment(fix(s))));
   } catch {
     return undefined;
   }
@@ -115,9 +126,9 @@ function effectOf(f: Finding, th: SpeciesThermo): Effect | undefined {
   if (f.rule === 'reaction-data') return undefined; // no Cp at all: nothing to compare against
   if (QUESTION_NO_VALUE.has(f.rule)) return undefined;
   const d = f.diagnosis;
-  if (d?.field === 'cp_unit' && th.curve) {
+  if ((d?.field === 'cp_unit' || d?.cause === 'degC-read-as-K') && th.curve) {
     const given = th.curve;
-    const fixed = curveWithUnitFix(th, f);
+    const fixed = curveWithCpFix(th, f);
     if (fixed) return (T) => Math.abs((fixed.dH(T) - given.dH(T) - T * (fixed.dS(T) - given.dS(T))) / (R * T));
   }
   if (d && isField(d.field)) {

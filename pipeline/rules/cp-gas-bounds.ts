@@ -2,9 +2,12 @@
 // far above the classical limit (3N − 3/2)R (5R/2 for an atom). Below 5R/2 the usual cause is a
 // unit slip in a poly or table correlation, Cp/R read as J/(mol K) above all; when rescaling the
 // coefficients by a slip's factor puts the whole range inside the bounds, that slip is diagnosed.
+// Otherwise, when the range starts at 100 K or below and the same correlation stays inside the bounds
+// over the range moved up by 273.15 K, its ends look like °C values read as K (a Shomate fit declared
+// 25–1027 "K" instead of 298–1300 K reaches absurd Cp near 25 K through its E/t² term).
 import { atomCount } from '../chemistry/formula.js';
 import { R_J_PER_MOL_K as R, T_REF_K } from '../cp/constants.js';
-import { cpLocation, scanOf, segmentOf, speciesCp } from '../cp/curve-cache.js';
+import { cpLocation, scanFunction, scanOf, segmentOf, speciesCp } from '../cp/curve-cache.js';
 import { CAL_J } from '../units/table.js';
 import type { CpSpec, Diagnosis, Finding, Rule, Species } from '../types.js';
 import { makeFinding } from './finding.js';
@@ -93,6 +96,26 @@ export function diagnoseUnitSlip(spec: CpSpec, lo: number, hi: number): { slip: 
   return undefined;
 }
 
+/** °C to K. */
+const DEGC_OFFSET_K = 273.15;
+/** A declared Tmin at most this is a plausible °C start of a range (0, 25, 100 °C); K. */
+export const DEGC_TMIN_MAX_K = 100;
+
+/**
+ * °C read as K: a range declared in K that starts at DEGC_TMIN_MAX_K or below, whose correlation
+ * breaks the bounds [lo, hi] over the declared range but stays inside them over the range moved up by
+ * 273.15 K. `corrected` is Tmin + 273.15 K. Not for `table` (its listed temperatures would move with
+ * the ends, leaving the same Cp values) nor for ranges whose ends were declared in °C.
+ */
+export function diagnoseDegCAsK(sp: Species, spec: CpSpec, lo: number, hi: number): Diagnosis | undefined {
+  if (spec.model === 'table' || spec.Tmin > DEGC_TMIN_MAX_K) return undefined;
+  if ((sp.units.cp_Tmin ?? 'K') !== 'K' || (sp.units.cp_Tmax ?? 'K') !== 'K') return undefined;
+  const seg = segmentOf(spec);
+  const scan = scanFunction((T) => seg.cp(T), spec.Tmin + DEGC_OFFSET_K, spec.Tmax + DEGC_OFFSET_K);
+  if (!(scan.min.cp >= lo && scan.max.cp <= hi)) return undefined;
+  return { cause: 'degC-read-as-K', field: 'cp_Tmin', corrected: Number((spec.Tmin + DEGC_OFFSET_K).toPrecision(8)), unit: 'K', residualAfter: 0 };
+}
+
 export const rule: Rule = {
   id: 'cp-gas-bounds',
   severity: 'error',
@@ -106,6 +129,10 @@ export const rule: Rule = {
       'ideal-gas Cp reaches {cp} J/(mol K) at {T} K, above the classical limit {classical} J/(mol K) for {atoms} atom(s) plus its allowance (flagged above {limit} J/(mol K))',
     aboveDiagnosed:
       'ideal-gas Cp reaches {cp} J/(mol K) at {T} K, above {limit} J/(mol K) (classical limit {classical} for {atoms} atom(s) plus allowance); the coefficients look like {words}: with cp_unit = {unitFix}, Cp({atT} K) = {corrected} J/(mol K), inside the bounds',
+    belowDegC:
+      'ideal-gas Cp falls to {cp} J/(mol K) at {T} K, below 5R/2 = {limit} J/(mol K); the range {Tmin}–{Tmax} K looks like °C values read as K: over {TminK}–{TmaxK} K the correlation stays inside the bounds',
+    aboveDegC:
+      'ideal-gas Cp reaches {cp} J/(mol K) at {T} K, above {limit} J/(mol K) (classical limit {classical} for {atoms} atom(s) plus allowance); the range {Tmin}–{Tmax} K looks like °C values read as K: over {TminK}–{TmaxK} K the correlation stays inside the bounds',
   },
 };
 
@@ -133,6 +160,13 @@ rule.check = (sp: Species): Finding[] => {
       const p = { ...params(low ? 'low' : 'high'), words: fix.slip.words, unitFix: fix.slip.unitFix, atT: r4(fix.T), corrected: fix.diagnosis.corrected };
       const field = sp.columns.cp_unit !== undefined ? 'cp_unit' : 'cp_coeffs';
       findings.push(makeFinding(rule, low ? 'belowDiagnosed' : 'aboveDiagnosed', p, cpLocation(sp, spec, field), { ...ids, diagnosis: fix.diagnosis }));
+      continue;
+    }
+    const degC = diagnoseDegCAsK(sp, spec, lim.lower, lim.upper);
+    if (degC) {
+      // the range's ends explain the whole range: one finding, on cp_Tmin
+      const p = { ...params(low ? 'low' : 'high'), Tmin: spec.Tmin, Tmax: spec.Tmax, TminK: r4(spec.Tmin + DEGC_OFFSET_K), TmaxK: r4(spec.Tmax + DEGC_OFFSET_K) };
+      findings.push(makeFinding(rule, low ? 'belowDegC' : 'aboveDegC', p, cpLocation(sp, spec, 'cp_Tmin'), { ...ids, diagnosis: degC }));
       continue;
     }
     if (low) findings.push(makeFinding(rule, 'below', params('low'), cpLocation(sp, spec, 'cp_coeffs'), ids));

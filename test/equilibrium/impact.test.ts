@@ -9,6 +9,7 @@ import { uncertaintyRanking } from '../../pipeline/equilibrium/uncertainty.js';
 import { parseFormula } from '../../pipeline/chemistry/formula.js';
 import { DEFAULT_TOLERANCES } from '../../pipeline/options.js';
 import { rule as gasBounds } from '../../pipeline/rules/cp-gas-bounds.js';
+import { rule as cpPositive } from '../../pipeline/rules/cp-positive.js';
 import { rule as gibbsHelmholtz } from '../../pipeline/rules/gibbs-helmholtz.js';
 import type { CheckContext, CpSpec, Finding, Species } from '../../pipeline/types.js';
 import { species } from './helpers.js';
@@ -156,6 +157,28 @@ describe('impact of findings', () => {
     const diffs = a0.map((p, i) => Math.abs(p.lnK! - b0[i]!.lnK!));
     const worst = Math.max(...diffs);
     expect(worst).toBeGreaterThan(1); // far more than any stated uncertainty would give
+    expect(findings[0]!.impact).toEqual([{ reaction: 'wgs', maxAbsDeltaLnK: expect.any(Number), T_K: temps[diffs.indexOf(worst)] }]);
+    expect(findings[0]!.impact![0]!.maxAbsDeltaLnK).toBeCloseTo(worst, 9);
+  });
+
+  test('a range with °C ends read as K: the ln K difference against the range moved up by 273.15 K', () => {
+    // H2's two NIST WebBook Shomate ranges, 298–1000 and 1000–2500 K (from memory), typed as 24.85–726.85
+    // and 726.85–2226.85 under a K header: the upper formula then speaks from 726.85 K, and near 25 K
+    // the lower one's E/t² term makes Cp negative (cp-positive)
+    const h2 = (shift: number): Species => {
+      const base = publishedSpecies().find((s) => s.name === 'H2')!;
+      return { ...base, cp: base.cp.map((c) => ({ ...c, Tmin: c.Tmin - shift, Tmax: c.Tmax - shift })) };
+    };
+    const slipped = publishedSpecies().map((s) => (s.name === 'H2' ? h2(273.15) : s));
+    const findings = cpPositive.check!(slipped.find((s) => s.name === 'H2')!, ctx);
+    expect(findings.map((f) => [f.diagnosis?.cause, f.location.field])).toEqual([['degC-read-as-K', 'cp_Tmin']]);
+    const temps = [298.15, 500, 800, 1000, 1200];
+    impactOfFindings(findings, [resolved(slipped, WGS, temps)]);
+    const a0 = computeReaction(resolved(slipped, WGS, temps), temps);
+    const b0 = computeReaction(resolved(publishedSpecies(), WGS, temps), temps);
+    const diffs = a0.map((p, i) => Math.abs(p.lnK! - b0[i]!.lnK!));
+    const worst = Math.max(...diffs);
+    expect(worst).toBeGreaterThan(1e-3);
     expect(findings[0]!.impact).toEqual([{ reaction: 'wgs', maxAbsDeltaLnK: expect.any(Number), T_K: temps[diffs.indexOf(worst)] }]);
     expect(findings[0]!.impact![0]!.maxAbsDeltaLnK).toBeCloseTo(worst, 9);
   });

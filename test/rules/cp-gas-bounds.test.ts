@@ -74,6 +74,27 @@ describe('cp-gas-bounds on tables', () => {
     expect(f.diagnosis).toBeUndefined();
   });
 
+  it('diagnoses a range whose ends are °C values read as K, on cp_Tmin', async () => {
+    // NIST WebBook Shomate fit for CO(g), 298–1300 K (from memory), its range typed as 24.85–1026.85
+    // (the same ends in °C) under a K header: near 25 K the E/t² term drives Cp far above 6.5R
+    const degC = renamed(SHOMATE.CO.slice(0, 1), 'CO-degC').map((r) => ({ ...r, Tmin: r.Tmin! - 273.15, Tmax: r.Tmax! - 273.15 }));
+    const report = await runRows([...renamed(SHOMATE.CO, 'CO-ok'), ...degC]);
+    const f = report.findings.filter((x) => x.rule === 'cp-gas-bounds');
+    expect(f).toHaveLength(1);
+    expect(f[0]).toMatchObject({ severity: 'error', messageId: 'aboveDegC', location: { line: 4, field: 'cp_Tmin' } });
+    expect(f[0].diagnosis).toMatchObject({ cause: 'degC-read-as-K', field: 'cp_Tmin', unit: 'K', residualAfter: 0 });
+    expect(f[0].diagnosis!.corrected).toBeCloseTo(SHOMATE.CO[0].Tmin!, 6);
+  });
+
+  it('a range starting above 100 K is not taken for °C read as K', async () => {
+    // the NIST WebBook Shomate fit for CO2(g), 298–1200 K (from memory), declared from 101 K: its E/t²
+    // term pulls Cp below 5R/2 near 100 K, yet 101 °C is no usual start of a fitted range
+    const early = renamed(SHOMATE.CO2.slice(0, 1), 'CO2-early').map((r) => ({ ...r, Tmin: 101 }));
+    const report = await runRows(early);
+    const f = report.findings.filter((x) => x.rule === 'cp-gas-bounds');
+    expect(f.map((x) => [x.messageId, x.diagnosis])).toEqual([['below', undefined]]);
+  });
+
   it('does not judge condensed phases', async () => {
     const rows: CpRow[] = renamed(POLY.COoverR, 'CO-liquid').map((r) => ({ ...r, phase: 'l', unit: 'J/(mol K)' }));
     const report = await runRows(rows);
