@@ -20,5 +20,8 @@ rule.check = (sp: Species): Finding[] => {
   const ids = { species: sp.name, phase: sp.phase };
   const usable = sp.dHf !== undefined && (sp.S !== undefined || sp.dGf !== undefined);
   const params = { species: sp.name, missing: missing.join(', ') };
-  return [usable ? makeFinding(rule, 'unchecked', params, sp.location, { ...ids, severity: 'info' }) : makeFinding(rule, 'unusable', params, sp.location, ids)];
+  // the first missing field, and its column when the table has one, so an empty cell is found at once
+  const field = missing[0]!;
+  const at = sp.columns[field] === undefined ? { ...sp.location, field } : { ...sp.location, column: sp.columns[field], field };
+  return [usable ? makeFinding(rule, 'unchecked', params, at, { ...ids, severity: 'info' }) : makeFinding(rule, 'unusable', params, at, ids)];
 };
