@@ -51,7 +51,7 @@ describe('thermovet check (built CLI)', () => {
     for (const args of [
       ['check', join(dir, 'missing.csv')],
       ['check', dir],
-      ['check', file('unit.csv', 'species,phase,dHf [kcal/mole]\nH2O,g,1\n')],
+      ['check', file('unit.csv', 'species,phase,dHf [kcal/furlong]\nH2O,g,1\n')],
       ['check', file('empty.csv', '')],
       ['check', file('x.dat', CLEAN)],
       ['check', '--fail-on', 'sometimes', file('ok.csv', CLEAN)],
@@ -61,8 +61,8 @@ describe('thermovet check (built CLI)', () => {
       expect(r.code, args.join(' ')).toBe(2);
       expect(r.stderr + r.stdout).not.toMatch(NO_STACK);
     }
-    const r = thermovet(['check', file('unit2.csv', 'species,phase,dHf [kcal/mole]\nH2O,g,1\n')]);
-    expect(r.stderr).toMatch(/unit2\.csv:1: unknown unit "kcal\/mole" for column dHf/);
+    const r = thermovet(['check', file('unit2.csv', 'species,phase,dHf [kcal/furlong]\nH2O,g,1\n')]);
+    expect(r.stderr).toMatch(/unit2\.csv:1: unknown unit "kcal\/furlong" for column dHf/);
   });
 
   it('--json output is deterministic with --deterministic', () => {
