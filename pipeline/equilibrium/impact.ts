@@ -7,8 +7,10 @@
 //
 // δg_i by kind of finding:
 //   1. A diagnosis (a known slip with its corrected value, in the declared unit): the data as given
-//      against the corrected value (converted to SI with the column's declared unit). A corrected
-//      value in a field the route does not read (ΔfG° when ΔfH° and S° are given) moves ln K by 0.
+//      against the corrected value (converted to SI with the column's declared unit). "As given" is
+//      the value on the finding's own row: an odd source on a later row is not the value ln K uses,
+//      so its impact is what using it instead of the correction would move. A corrected value in a
+//      field the route does not read (ΔfG° when ΔfH° and S° are given) moves ln K by 0.
 //      A unit slip in a Cp correlation (diagnosis.field 'cp_unit', from cp-gas-bounds or
 //      cp-solid-bounds): the curve as given against the curve with that range's Cp rescaled by the
 //      slip's factor, both integrated from 298.15 K through the joins; a range whose ends were °C
@@ -17,6 +19,8 @@
 //   2. A Cp extrapolation (rule ids containing 'extrapolat' or 'coverage'): the rigorous route
 //      against the same curve with Cp frozen at its value at the nearest end of the fitted range
 //      outside it. The spread is how much the answer hangs on the extrapolated polynomial.
+//   2b. Two sources that disagree, or a spread with no odd one out (cross-source, no diagnosis): the
+//      field moved by the spread between the sources.
 //   3. A Gibbs–Helmholtz residual without a diagnosis: one of the three values is off by the residual
 //      r, but which is unknown, so each value the route reads is moved in turn (ΔfH° or ΔfG° by r,
 //      S° by r/298.15 K) and the largest shift is kept.
@@ -30,7 +34,7 @@ import { R_J_PER_MOL_K, T_REF_K } from '../cp/constants.js';
 import { buildCurve, buildSegment } from '../cp/index.js';
 import { cpUnitSlips } from '../rules/cp-gas-bounds.js';
 import { fromDeclared } from '../units/convert.js';
-import type { CpCurve, CpSpec, Finding } from '../types.js';
+import type { CpCurve, CpSpec, Finding, RowValues } from '../types.js';
 import type { ResolvedReaction } from './reactions.js';
 import type { SpeciesThermo } from './thermo.js';
 import { fieldsUsed, lnKSensitivity, type Field } from './uncertainty.js';
@@ -115,14 +119,22 @@ export function curveWithCpFix(th: SpeciesThermo, f: Finding): CpCurve | undefin
   }
 }
 
+/** The species row the finding points at (same file and line), if it is one of the species' value rows. */
+function rowOf(th: SpeciesThermo, f: Finding): RowValues | undefined {
+  return th.species.values.find((v) => v.location.line === f.location.line && v.location.file === f.location.file);
+}
+
 function effectOf(f: Finding, th: SpeciesThermo): Effect | undefined {
   const R = R_J_PER_MOL_K;
-  const shift = (o: Partial<Record<Field, number>>): Effect => {
-    const v = valuesWith(th, o);
-    const dH = v.dHf - th.dHf;
-    const dS = v.S - th.S;
+  /** |Δln K| per unit ν between the route's values with overrides a and with overrides b */
+  const between = (a: Partial<Record<Field, number>>, b: Partial<Record<Field, number>>): Effect => {
+    const va = valuesWith(th, a);
+    const vb = valuesWith(th, b);
+    const dH = vb.dHf - va.dHf;
+    const dS = vb.S - va.S;
     return (T) => Math.abs((dH - T * dS) / (R * T));
   };
+  const shift = (o: Partial<Record<Field, number>>): Effect => between({}, o);
   if (f.rule === 'reaction-data') return undefined; // no Cp at all: nothing to compare against
   if (QUESTION_NO_VALUE.has(f.rule)) return undefined;
   const d = f.diagnosis;
@@ -132,8 +144,16 @@ function effectOf(f: Finding, th: SpeciesThermo): Effect | undefined {
     if (fixed) return (T) => Math.abs((fixed.dH(T) - given.dH(T) - T * (fixed.dS(T) - given.dS(T))) / (R * T));
   }
   if (d && isField(d.field)) {
+    // from the value on the finding's own row (another source's row is not the one ln K uses) to the correction
     const corrected = fromDeclared(d.corrected, d.field, th.species.units[d.field]);
-    return shift({ [d.field]: corrected });
+    const given = rowOf(th, f)?.[d.field];
+    return given === undefined ? shift({ [d.field]: corrected }) : between({ [d.field]: given }, { [d.field]: corrected });
+  }
+  if (f.rule === 'cross-source' && isField(f.params.field) && typeof f.params.spread === 'number') {
+    // two sources, or a spread with no odd one out: the disagreement itself, in the field (display kJ/mol or J/(mol K))
+    const x = f.params.field;
+    const value = x === 'dHf' ? th.dHf : x === 'S' ? th.S : th.dGf!;
+    return between({}, { [x]: value + f.params.spread * (x === 'S' ? 1 : 1000) });
   }
   if (/extrapolat|coverage/.test(f.rule)) {
     const c = th.curve;

@@ -203,6 +203,39 @@ describe('impact of findings', () => {
     expect(other.impact![0]!.maxAbsDeltaLnK).toBeCloseTo(1000 / (R * 298.15), 9);
   });
 
+  test('an odd source on a later row: from the value on that row to the correction, not from the value ln K uses', () => {
+    // CO(g) ΔfH° −110.53 kJ/mol (CODATA 1989) on line 2; a second source on line 4 typed it in kcal/mol
+    const table = publishedSpecies().map((s) => {
+      if (s.name !== 'CO') return s;
+      const loc = (line: number) => ({ file: 'species.csv', line });
+      const rows = [
+        { dHf: s.dHf!, S: s.S!, P_ref: 1, source: 'CODATA 1989', location: loc(2) },
+        { dHf: s.dHf! / 4.184, S: s.S!, P_ref: 1, source: 'lab sheet (invented)', location: loc(4) },
+      ];
+      return { ...s, values: rows };
+    });
+    const co = table.find((s) => s.name === 'CO')!;
+    const f = finding({
+      rule: 'cross-source',
+      species: 'CO',
+      phase: 'g',
+      location: { file: 'species.csv', line: 4, field: 'dHf' },
+      diagnosis: { cause: 'odd-source', field: 'dHf', corrected: -110.53, unit: 'kJ/mol', residualAfter: 0 },
+    });
+    impactOfFindings([f], [resolved(table)]);
+    // ν(CO) = −1; the shift is T-independent in ΔH, so largest at the lowest temperature
+    const dH = co.dHf! - co.dHf! / 4.184;
+    expect(f.impact![0]!.T_K).toBe(298.15);
+    expect(f.impact![0]!.maxAbsDeltaLnK).toBeCloseTo(Math.abs(dH) / (R * 298.15), 6);
+  });
+
+  test('two sources that disagree: the field moved by their spread, not by a nominal uncertainty', () => {
+    const f = finding({ rule: 'cross-source', messageId: 'two', species: 'CO2', phase: 'g', params: { field: 'S', spread: 4.2 }, location: { file: 'species.csv', line: 7, field: 'S' } });
+    impactOfFindings([f], [resolved(publishedSpecies())]);
+    // S° moved by 4.2 J/(mol K) moves ln K by 4.2/R at every temperature (ν(CO2) = +1)
+    expect(f.impact![0]!.maxAbsDeltaLnK).toBeCloseTo(4.2 / R, 9);
+  });
+
   test('an exact repeat of an earlier row questions no value: no impact', () => {
     const r = resolved(publishedSpecies());
     const f = finding({ rule: 'duplicate-row', species: 'CO', phase: 'g', location: { file: 'species.csv', line: 9 } });
