@@ -86,7 +86,7 @@ function renderCsv(results: readonly ReactionResult[]): string {
           p.lnKShortcut,
           p.lnK - p.lnKShortcut,
           p.u_lnK,
-          csvCell(p.extrapolated.map((e) => `${e.species}:${e.outsideK}`).join(' ')),
+          csvCell(p.extrapolated.map((e) => `${e.species}:${Number(e.outsideK.toPrecision(6))}`).join(' ')),
           csvCell((p.cpMissing ?? []).join(' ')),
         ]
           .map((c) => (typeof c === 'number' ? String(c) : (c ?? '')))

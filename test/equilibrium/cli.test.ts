@@ -62,6 +62,13 @@ describe('thermovet lnk (built CLI)', () => {
     expect(Math.abs(Number(nh3at700[7]) - -4.0578)).toBeLessThan(0.005);
   });
 
+  it('CSV names the extrapolated species with the kelvin outside, without float noise', () => {
+    // NH3's Shomate fit ends at 1400 K; 1448.15 − 1400 is 48.15000000000009 in floating point
+    const r = thermovet(['lnk', table, '-e', 'N2(g) + 3 H2(g) = 2 NH3(g)', '-t', '1448.15', '--format', 'csv']);
+    expect(r.code).toBe(0);
+    expect(r.stdout).toContain('NH3(g):48.15,');
+  });
+
   it('text output shows the extrapolated species at the right temperatures and the caution', () => {
     const r = thermovet(['lnk', table, '-e', 'N2(g) + 3 H2(g) = 2 NH3(g)', '-t', '1000 1500']);
     expect(r.code).toBe(0);
