@@ -1,4 +1,6 @@
 // The JSON report: the Report itself, keys in a fixed order, two-space indent, trailing newline.
+// Each finding also carries its file and line at the top level (the contract's `findings[] {rule,
+// severity, species, phase, file, line, message, …}`), beside the full `location`.
 //
 // A report of 10^6 rows holds 10^5–10^6 species summaries: as one string it would cost a few hundred
 // MB at once. `jsonChunks` yields the same bytes as `renderJson` piece by piece (a few hundred array elements at a
@@ -7,10 +9,25 @@ import { closeSync, openSync, renameSync, rmSync, writeSync } from 'node:fs';
 import { basename, dirname, join } from 'node:path';
 import { InputError } from '../pipeline/errors.js';
 import { makeDirs } from './write.js';
-import type { Report } from '../pipeline/types.js';
+import type { Finding, Report } from '../pipeline/types.js';
+
+/** A finding as the JSON report writes it: file and line lifted beside rule, severity, species and phase. */
+export function findingForJson(f: Finding): Record<string, unknown> {
+  const { rule, severity, species, phase, message, ...rest } = f;
+  return {
+    rule,
+    severity,
+    ...(species !== undefined ? { species } : {}),
+    ...(phase !== undefined ? { phase } : {}),
+    file: f.location.file,
+    line: f.location.line,
+    message,
+    ...rest,
+  };
+}
 
 export function renderJson(report: Report): string {
-  return JSON.stringify(report, null, 2) + '\n';
+  return JSON.stringify(report.findings ? { ...report, findings: report.findings.map(findingForJson) } : report, null, 2) + '\n';
 }
 
 /** array elements serialised per JSON.stringify call */
@@ -40,7 +57,8 @@ export function* jsonChunks(report: Report): Generator<string> {
       yield `  ${JSON.stringify(key)}: [\n`;
       // a batch inside two arrays comes out at exactly this depth: "[\n  [\n" + elements + "\n  ]\n]"
       for (let i = 0; i < value.length; i += BATCH) {
-        const text = JSON.stringify([value.slice(i, i + BATCH)], null, 2);
+        const batch = value.slice(i, i + BATCH);
+        const text = JSON.stringify([key === 'findings' ? (batch as Finding[]).map(findingForJson) : batch], null, 2);
         yield text.slice(6, -6) + (i + BATCH < value.length ? ',\n' : '\n');
       }
       yield '  ]' + end;

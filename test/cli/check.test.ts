@@ -35,6 +35,9 @@ describe('thermovet check (built CLI)', () => {
     const report = readReport(out);
     const f = report.findings.find((x: any) => x.rule === 'gibbs-helmholtz');
     expect(f).toMatchObject({ species: 'CO2', location: { line: 3, field: 'dHf' }, diagnosis: { cause: 'cal-read-as-J', field: 'dHf' } });
+    // the contract's flat form too: findings[] {rule, severity, species, phase, file, line, message, …}
+    expect(Object.keys(f).slice(0, 7)).toEqual(['rule', 'severity', 'species', 'phase', 'file', 'line', 'message']);
+    expect([f.file, f.line]).toEqual([p, 3]);
     expect(f.diagnosis.corrected).toBeCloseTo(-393.522, 3);
     expect(r.stdout).toContain(`${p}:3:3`);
     expect(thermovet(['check', p, '--fail-on', 'never']).code).toBe(0);
