@@ -109,7 +109,7 @@ export async function check(options: OptionsNormalized, run: RunInfo): Promise<R
     summary: summarize(rows, accepted, rejected, speciesCount, findings),
     findings,
     species: summaries,
-    ...(reactions ? { reactions } : {}),
+    reactions: reactions ?? [], // always present: empty when no reactions file is given
     provenance: {
       generatedAt: run.generatedAt,
       inputs,

@@ -285,11 +285,12 @@ export async function renderHtml(report: Report, opts: HtmlOptions = {}): Promis
 
   if (cpSpecies.length) {
     const win = windowSpan(useWindow);
+    const withCp = species.filter((s) => s.cp).length;
     out.push('<section id="cp"><h2>Heat capacity</h2>');
     out.push(
       `<p class="note">Cp against T as each species’ correlation gives it: solid where a fitted range covers T, dashed where it is extrapolated. ${
         win ? `The shaded band is the use window, ${n(win[0])}–${n(win[1])} K.` : 'No use window was declared.'
-      } The strip under each chart shows the fitted ranges and the window.${species.length > cpSpecies.length ? ` Charts are drawn for ${cpSpecies.length} of ${species.length} species (those in reactions first, then those with Cp findings).` : ''}</p>`,
+      } The strip under each chart shows the fitted ranges and the window.${withCp > cpSpecies.length ? ` Charts are drawn for ${cpSpecies.length} of the ${withCp} species with a Cp correlation (those in reactions first, then those with Cp findings, then the rest by name).` : ''}</p>`,
     );
     cpSpecies.forEach((s, i) => {
       const svg = svgs.get(`cp:${i}`);
