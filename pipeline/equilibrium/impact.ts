@@ -32,7 +32,7 @@
 //   6. A finding that questions no value (an exact repeat of an earlier row): no impact.
 import { R_J_PER_MOL_K, T_REF_K } from '../cp/constants.js';
 import { buildCurve, buildSegment } from '../cp/index.js';
-import { cpUnitSlips } from '../rules/cp-gas-bounds.js';
+import { cpUnitSlips, DEGC_OFFSET_K } from '../rules/cp-gas-bounds.js';
 import { fromDeclared } from '../units/convert.js';
 import type { CpCurve, CpSpec, Finding, RowValues } from '../types.js';
 import type { ResolvedReaction } from './reactions.js';
@@ -106,7 +106,7 @@ export function curveWithCpFix(th: SpeciesThermo, f: Finding): CpCurve | undefin
   let fix: ((s: CpSpec) => CpSpec) | undefined;
   if (cause === 'degC-read-as-K') {
     // a column slip: every range of the species from the same file moves with the flagged one
-    fix = (s) => (s.location.file === target.location.file ? { ...s, Tmin: s.Tmin + 273.15, Tmax: s.Tmax + 273.15 } : s);
+    fix = (s) => (s.location.file === target.location.file ? { ...s, Tmin: s.Tmin + DEGC_OFFSET_K, Tmax: s.Tmax + DEGC_OFFSET_K } : s);
   } else {
     const slip = cpUnitSlips(target).find((x) => x.cause === cause);
     if (slip) fix = (s) => (s === target ? { ...s, unitFactor: s.unitFactor * slip.factor } : s);

@@ -96,8 +96,8 @@ export function diagnoseUnitSlip(spec: CpSpec, lo: number, hi: number): { slip: 
   return undefined;
 }
 
-/** °C to K. */
-const DEGC_OFFSET_K = 273.15;
+/** °C to K: the offset a range read in the wrong scale is off by. */
+export const DEGC_OFFSET_K = 273.15;
 /** A declared Tmin at most this is a plausible °C start of a range (0, 25, 100 °C); K. */
 export const DEGC_TMIN_MAX_K = 100;
 

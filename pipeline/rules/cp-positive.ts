@@ -6,7 +6,7 @@
 // by 273.15 K looks like °C values read as K (see cp-gas-bounds); the finding then points at cp_Tmin.
 import { cpLocation, scanOf, speciesCp } from '../cp/curve-cache.js';
 import type { Finding, Rule, Species } from '../types.js';
-import { diagnoseDegCAsK } from './cp-gas-bounds.js';
+import { DEGC_OFFSET_K, diagnoseDegCAsK } from './cp-gas-bounds.js';
 import { makeFinding } from './finding.js';
 
 export const rule: Rule = {
@@ -35,7 +35,7 @@ rule.check = (sp: Species): Finding[] => {
     const ids = { species: sp.name, phase: sp.phase };
     const degC = diagnoseDegCAsK(sp, spec, Number.MIN_VALUE, Infinity);
     if (degC) {
-      const p = { ...params, TminK: r5(spec.Tmin + 273.15), TmaxK: r5(spec.Tmax + 273.15) };
+      const p = { ...params, TminK: r5(spec.Tmin + DEGC_OFFSET_K), TmaxK: r5(spec.Tmax + DEGC_OFFSET_K) };
       findings.push(makeFinding(rule, 'notPositiveDegC', p, cpLocation(sp, spec, 'cp_Tmin'), { ...ids, diagnosis: degC }));
     } else {
       findings.push(makeFinding(rule, 'notPositive', params, cpLocation(sp, spec, 'cp_coeffs'), ids));
