@@ -1,7 +1,7 @@
 // CSV and TSV through csv-parse, streaming, no per-cell cast. Every record keeps its physical start line.
 import { createReadStream } from 'node:fs';
 import { parse, type CsvError } from 'csv-parse';
-import { InputError } from '../errors.js';
+import { InputError, excerpt } from '../errors.js';
 import { LIMITS, type TableSink } from './events.js';
 import { sniff } from './sniff.js';
 
@@ -33,6 +33,7 @@ export async function readDelimited(path: string, delimiter: ',' | '\t', sink: T
   let consumed = 0; // lines taken by the records seen so far
   let headerSeen = false;
   let width = 0;
+  let header: string[] = [];
   let nextLine = 1; // where the next record starts at the earliest, for errors raised by the parser
   const onRecord = (record: string[], skipped: number): void => {
     const line = 1 + consumed + skipped;
@@ -57,11 +58,17 @@ export async function readDelimited(path: string, delimiter: ',' | '\t', sink: T
           throw new InputError('wrong-delimiter', `the header is one column; the file looks delimited by ${name}, not by ${delimiter === '\t' ? 'tabs' : 'commas'} (use --format or rename the file)`, { file: path, line });
         }
       }
+      header = record;
       sink({ type: 'header', cells: record, line });
       return;
     }
     if (record.length !== width) {
-      sink({ type: 'unreadable', line, messageId: 'ragged', params: { found: record.length, expected: width } });
+      // where the row and the header part: the first header column left without a value, or the first field beyond the header
+      const short = record.length < width;
+      const column = short ? record.length + 1 : width + 1;
+      const field = short ? excerpt(header[record.length]!.trim()) : undefined;
+      const params = { found: record.length, expected: width, column, ...(field !== undefined ? { field } : {}) };
+      sink({ type: 'unreadable', line, messageId: short ? 'ragged' : 'raggedLong', params, column, ...(field !== undefined ? { field } : {}) });
       return;
     }
     sink({ type: 'row', cells: record, line });

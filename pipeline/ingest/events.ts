@@ -3,7 +3,7 @@
 export type TableEvent =
   | { type: 'header'; cells: string[]; line: number }
   | { type: 'row'; cells: readonly (string | undefined)[]; line: number }
-  | { type: 'unreadable'; line: number; messageId: 'ragged' | 'json' | 'notObject' | 'type'; params: Record<string, string | number> };
+  | { type: 'unreadable'; line: number; messageId: 'ragged' | 'raggedLong' | 'json' | 'notObject' | 'type'; params: Record<string, string | number>; column?: number; field?: string };
 
 export type TableSink = (event: TableEvent) => void;
 

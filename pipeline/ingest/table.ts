@@ -52,7 +52,8 @@ export async function ingestTable(
     counts.rows++;
     if (ev.type === 'unreadable') {
       counts.rejected++;
-      onFinding(makeFinding(unreadableRow, ev.messageId, ev.params, { file, line: ev.line }));
+      const where = { file, line: ev.line, ...(ev.column !== undefined ? { column: ev.column } : {}), ...(ev.field !== undefined ? { field: ev.field } : {}) };
+      onFinding(makeFinding(unreadableRow, ev.messageId, ev.params, where));
       return;
     }
     ctx ??= rowContext(file, resolveHeader([], file, ev.line, table.headerMap, table.units, false), positional);
