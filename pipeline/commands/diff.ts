@@ -33,7 +33,7 @@ export function registerDiff(program: Command): void {
     .description('compare two versions of a dataset: species added, removed and changed, findings that appeared or went away, and the Δln K of each change (exit 1 when the new version introduces findings at or above --fail-on)')
     .argument('<old>', 'the old version: a table (CSV, TSV, JSON, NDJSON) or a manifest (YAML, or a JSON object)')
     .argument('<new>', 'the new version, likewise')
-    .option('--reactions <file>', 'reactions of interest (CSV: id, equation, T or Tmin/Tmax); else the manifest\'s')
+    .option('-r, --reactions <file>', 'reactions of interest (CSV: id, equation, T or Tmin/Tmax); else the manifest\'s')
     .option('--json <out>', 'write the diff as JSON (schemas/diff.schema.json) to this file')
     .addOption(new Option('--fail-on <severity>', 'lowest severity of a new finding that fails the run').choices(['error', 'warning', 'never']).default('error'))
     .addOption(new Option('--format <format>', 'table format when the extension does not tell').choices(['csv', 'tsv', 'json', 'ndjson']))

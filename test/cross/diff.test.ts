@@ -101,6 +101,8 @@ describe('thermovet diff (CLI)', () => {
     const data = JSON.parse(readFileSync(json, 'utf8'));
     expect(validateDiff(data), ajv.errorsText(validateDiff.errors)).toBe(true);
     expect(thermovet(['diff', `${DIR}/v1.csv`, `${DIR}/v2.csv`, '--fail-on', 'never', '-q']).code).toBe(0);
+    // -r is --reactions here too, as for check and lnk (the README's example uses it)
+    expect(thermovet(['diff', `${DIR}/v1.csv`, `${DIR}/v2.csv`, '-r', `${DIR}/reactions.csv`, '--fail-on', 'never']).stdout).toMatch(/wgs -0\.481089 at 500 K/);
   });
   it('exits 0 when nothing changed, and 2 on a missing file', () => {
     expect(thermovet(['diff', `${DIR}/v1.csv`, `${DIR}/v1.csv`, '-q']).code).toBe(0);
