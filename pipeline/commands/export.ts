@@ -5,6 +5,7 @@
 import { Option, type Command } from 'commander';
 import { exportTables, type DropOn } from '../export/index.js';
 import { normalizeOptions, type Options } from '../options.js';
+import { excerpt } from '../errors.js';
 import type { FailOn } from '../types.js';
 import { exitCodeFor } from '../verdict.js';
 import { generatedAt, version, waiverDay } from './shared.js';
@@ -29,7 +30,9 @@ async function runExport(tables: string[], flags: ExportFlags): Promise<number> 
   const options = normalizeOptions(o);
   const r = await exportTables(options, { out: flags.out, dropOn: flags.dropOn, ...(flags.json ? { reportPath: flags.json } : {}) }, { version, generatedAt: generatedAt(!!flags.deterministic), waiverDay: waiverDay() });
   if (!flags.quiet) {
-    const left = r.speciesLeftOut.length ? ` (species left out: ${r.speciesLeftOut.slice(0, 10).join(', ')}${r.speciesLeftOut.length > 10 ? ', …' : ''})` : '';
+    // keys are name|phase; names come from the data, so they are cut and their control characters escaped
+    const label = (key: string): string => `${excerpt(key.slice(0, key.lastIndexOf('|')))} (${excerpt(key.slice(key.lastIndexOf('|') + 1))})`;
+    const left = r.speciesLeftOut.length ? ` (species left out: ${r.speciesLeftOut.slice(0, 10).map(label).join(', ')}${r.speciesLeftOut.length > 10 ? ', …' : ''})` : '';
     process.stdout.write(
       `thermovet ${version} export · screening only; a qualified engineer reviews before design use\n` +
         `  rows read ${r.rowsRead}, rejected ${r.rowsRejected}, left out ${r.rowsLeftOut}, written ${r.rowsWritten}${left}\n` +

@@ -119,6 +119,16 @@ describe('export round trip', async () => {
   });
 });
 
+describe('export at the terminal', () => {
+  it('names the species left out inert: escapes from the data never reach the terminal raw', () => {
+    // an invented species name carrying an ANSI colour sequence; its ΔfG° of 0 fails Gibbs–Helmholtz, so it is left out
+    const p = tempFile('species,formula,phase,dHf,dGf,S\n"\u001b[31mEVIL",CO,g,-110.53,0,197.66\n');
+    const r = thermovet(['export', p, '-o', join(mkdtempSync(join(tmpdir(), 'thermovet-export-')), 'v.csv')]);
+    expect(r.stdout).toContain('species left out: \\u001b[31mEVIL (g)');
+    expect(r.stdout).not.toContain('\u001b');
+  });
+});
+
 describe('export cells', () => {
   it('protects every formula-starting character and leaves other text alone', () => {
     expect(['=1', '+1', '-1', '@A', '\tx', '\rx'].map((t) => textCell(t))).toEqual(['"\'=1"', '"\'+1"', '"\'-1"', '"\'@A"', '"\'\tx"', '"\'\rx"']);
