@@ -13,6 +13,7 @@ import { normalizeOptions, type Options } from '../options.js';
 import { SPECIES_RULES } from '../rules/index.js';
 import type { Finding, UseWindow } from '../types.js';
 import { version } from './shared.js';
+import { inert } from '../../reports/terminal.js';
 
 interface LnkFlags {
   manifest?: string;
@@ -97,7 +98,7 @@ async function runLnk(tables: string[], flags: LnkFlags): Promise<number> {
 
   process.stdout.write(renderLnk(eq.results, flags.format, { version, findings: [...findings, ...dataFindings] }));
 
-  for (const f of findings) if (f.severity !== 'info') process.stderr.write(`${f.location.file}:${f.location.line}: ${f.severity}: ${f.message} [${f.rule}]\n`);
+  for (const f of findings) if (f.severity !== 'info') process.stderr.write(inert(`${f.location.file}:${f.location.line}: ${f.severity}: ${f.message} [${f.rule}]`) + '\n');
   const errs = dataFindings.filter((f) => f.severity === 'error').length;
   const warns = dataFindings.filter((f) => f.severity === 'warning').length;
   if (errs + warns > 0) {

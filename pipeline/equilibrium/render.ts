@@ -1,4 +1,5 @@
 // The ln K table as text, CSV or JSON. Pure: results in, a string out.
+import { inert } from '../../reports/terminal.js';
 import { formatNumber } from '../rules/finding.js';
 import type { Finding, ReactionResult } from '../types.js';
 import type { EquilibriumPoint } from './lnk.js';
@@ -7,11 +8,6 @@ export type LnkFormat = 'text' | 'csv' | 'json';
 
 export const CAUTION =
   'Screening values only: they follow from the data as given. A qualified engineer reviews them before design use; local codes and licensed practice govern.';
-
-/** Input text never reaches a terminal raw. */
-function inert(s: string): string {
-  return s.replace(/[\u0000-\u001f\u007f-\u009f\u2028\u2029\u202a-\u202e\u2066-\u2069]/g, (c) => `\\u${c.charCodeAt(0).toString(16).padStart(4, '0')}`);
-}
 
 function fixed(v: number | undefined, digits: number): string {
   if (v === undefined || !Number.isFinite(v)) return '-';
