@@ -122,6 +122,10 @@ rule.check = (sp: Species, ctx): Finding[] => {
     const warn = Math.max(EMBEDDED_H_WARNING, 2 * u);
     const diff = H - dHf;
     if (Math.abs(diff) <= warn) continue;
+    // the row's own ΔfH° fails Gibbs–Helmholtz and a slip that turns it into H closes it: the row is at
+    // fault, not the coefficient, and gibbs-helmholtz (with the 298.15 K comparison below) says so
+    const rowSlip = bestSlip(dHf, (x) => H - x, warn, 'dHf', sp.units.dHf);
+    if (rowSlip && rowCloses(sp, row, ctx) === false && rowCloses(sp, row, ctx, { field: 'dHf', value: rowSlip.corrected }) !== false) continue;
     flagged.add(s);
     const severity: Severity = Math.abs(diff) > Math.max(EMBEDDED_H_ERROR, 2 * u) ? 'error' : 'warning';
     const base = { value: s.coeffs[7], row: r(dHf / 1000), diff: r(diff / 1000, 4), tol: r((severity === 'error' ? Math.max(EMBEDDED_H_ERROR, 2 * u) : warn) / 1000, 3) };

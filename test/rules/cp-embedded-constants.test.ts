@@ -60,6 +60,17 @@ describe('cp-embedded-constants', () => {
     expect(f.location.field).toBe('dHf');
   });
 
+  it('a Shomate H coefficient is not blamed when the row is: ΔfH° with its sign flipped', async () => {
+    // CO from the NIST WebBook Shomate fit (H = −110.5271 kJ/mol, from memory); the row's ΔfH° typed as +110.53
+    const rows = withG(renamed(SHOMATE.CO, 'CO-sign'), -137.163).map((r) => ({ ...r, dHf: 110.53 }));
+    const report = await runRows(rows);
+    const mine = report.findings.filter((f) => f.rule === 'cp-embedded-constants');
+    expect(mine.filter((f) => f.location.field === 'cp_coeffs')).toEqual([]);
+    expect(mine.map((f) => [f.messageId, f.diagnosis?.cause, f.diagnosis?.field])).toEqual([['enthalpyDiagnosed', 'sign', 'dHf']]);
+    const gh = report.findings.find((f) => f.rule === 'gibbs-helmholtz')!;
+    expect(gh.diagnosis).toMatchObject({ cause: 'sign', field: 'dHf' });
+  });
+
   it('the constants are blamed when the row closes: a6 computed from ΔfH° in kcal/mol', async () => {
     // a6 shifted so that the implied ΔfH° is −110.53/4.184 kJ/mol instead of −110.53
     const shift = (-110.53 / 4.184 + 110.53) * 1000 / R;
