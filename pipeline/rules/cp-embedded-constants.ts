@@ -35,13 +35,13 @@ export const rule: Rule = {
   docs: 'docs/rules/cp-embedded-constants.md',
   description: "The integration constants of Shomate, NASA-7 and NASA-9 correlations must reproduce the row's ΔfH° and S° at 298.15 K.",
   messages: {
-    enthalpy: 'the {model} constants imply ΔfH°(298.15 K) = {implied} kJ/mol; the row gives dHf = {row} kJ/mol (difference {diff} kJ/mol, tolerance {tol}){extrapolated}',
-    entropy: 'the {model} constants imply S°(298.15 K) = {implied} J/(mol K); the row gives S = {row} J/(mol K) (difference {diff} J/(mol K), tolerance {tol}){extrapolated}',
+    enthalpy: 'the {model} constants imply ΔfH°(298.15 K) = {implied} kJ/mol; the row gives dHf = {row} kJ/mol (difference {diff} kJ/mol, tolerance {tol} kJ/mol){extrapolated}',
+    entropy: 'the {model} constants imply S°(298.15 K) = {implied} J/(mol K); the row gives S = {row} J/(mol K) (difference {diff} J/(mol K), tolerance {tol} J/(mol K)){extrapolated}',
     enthalpyDiagnosed:
       'the {model} constants imply ΔfH°(298.15 K) = {implied} kJ/mol; the row gives dHf = {row} kJ/mol (difference {diff} kJ/mol); it looks like {words} in {blamed}: corrected {corrected} {unit} leaves {residualAfter} kJ/mol{extrapolated}',
     entropyDiagnosed:
       'the {model} constants imply S°(298.15 K) = {implied} J/(mol K); the row gives S = {row} J/(mol K) (difference {diff} J/(mol K)); it looks like {words} in {blamed}: corrected {corrected} {unit} leaves {residualAfter} J/(mol K){extrapolated}',
-    shomateH: 'the Shomate H coefficient ({value} kJ/mol) is ΔfH°298 by definition; the row gives dHf = {row} kJ/mol (difference {diff} kJ/mol, tolerance {tol})',
+    shomateH: 'the Shomate H coefficient ({value} kJ/mol) is ΔfH°298 by definition; the row gives dHf = {row} kJ/mol (difference {diff} kJ/mol, tolerance {tol} kJ/mol)',
     shomateHDiagnosed:
       'the Shomate H coefficient ({value} kJ/mol) is ΔfH°298 by definition; the row gives dHf = {row} kJ/mol; the coefficient looks like {words}: {corrected} kJ/mol leaves {residualAfter} kJ/mol',
     shomateOffset:
