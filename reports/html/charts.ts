@@ -271,13 +271,13 @@ const line = (color: string, dash = ''): string => sw(`<line x1="1" y1="6" x2="2
 const box = (color: string, opacity = 1): string => sw(`<rect x="4" y="1" width="18" height="10" fill="${color}" fill-opacity="${opacity}"/>`);
 const tri = (color: string): string => sw(`<path d="M13 1 L19 11 L7 11 Z" fill="${color}"/>`);
 
-/** The key the page prints under each kind of chart; the same colours and dashes as the specs above. */
-export function chartKey(kind: 'cp' | 'lnK' | 'gibbs'): KeyEntry[] {
+/** The key the page prints under each kind of chart; the same colours and dashes as the specs above (Cp: the window only when one is drawn). */
+export function chartKey(kind: 'cp' | 'lnK' | 'gibbs', withWindow = true): KeyEntry[] {
   if (kind === 'cp') {
     return [
       { swatch: line(PALETTE.blue), label: CP_FIT },
       { swatch: line(PALETTE.vermillion, '6 4'), label: CP_EXTRA },
-      { swatch: box(PALETTE.sky, 0.45), label: WINDOW },
+      ...(withWindow ? [{ swatch: box(PALETTE.sky, 0.45), label: WINDOW }] : []),
     ];
   }
   if (kind === 'lnK') {

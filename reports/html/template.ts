@@ -156,8 +156,8 @@ function findingsSection(report: Report, chartAnchor: Map<string, string>): stri
   return out.join('');
 }
 
-function figure(svg: string, label: string, caption: string, kind: 'cp' | 'lnK' | 'gibbs'): string {
-  const key = chartKey(kind)
+function figure(svg: string, label: string, caption: string, kind: 'cp' | 'lnK' | 'gibbs', withWindow = true): string {
+  const key = chartKey(kind, withWindow)
     .map((k) => `<li>${k.swatch}${esc(k.label)}</li>`)
     .join('');
   return `<figure class="chart"><div role="img" aria-label="${esc(label)}">${svg}</div><ul class="key">${key}</ul><figcaption>${caption}</figcaption></figure>`;
@@ -295,7 +295,7 @@ export async function renderHtml(report: Report, opts: HtmlOptions = {}): Promis
     cpSpecies.forEach((s, i) => {
       const svg = svgs.get(`cp:${i}`);
       out.push(`<h3 id="cp-${i + 1}">${esc(s.name)} <span class="phase">(${esc(s.phase)})</span> <span class="meta mono">${esc(s.formula)}</span></h3>`);
-      if (svg) out.push(figure(svg, `Heat capacity of ${speciesLabel(s)} against temperature`, cpCaption(s), 'cp'));
+      if (svg) out.push(figure(svg, `Heat capacity of ${speciesLabel(s)} against temperature`, cpCaption(s), 'cp', win !== undefined));
     });
     out.push('</section>');
   }

@@ -85,6 +85,18 @@ describe('renderHtml', () => {
   });
 });
 
+describe('chart keys', () => {
+  it('the Cp key names the use window only when the report has one', async () => {
+    const cpKey = (html: string): string => html.slice(html.indexOf('<section id="cp"'), html.indexOf('</figure>', html.indexOf('<section id="cp"')));
+    expect(cpKey(await renderHtml(makeReport()))).toContain('use window');
+    const r = makeReport();
+    r.dataset = { ...r.dataset!, useWindow: {} };
+    const html = await renderHtml(r);
+    expect(html).toContain('No use window was declared.');
+    expect(cpKey(html)).not.toContain('use window</li>');
+  });
+});
+
 describe('chart specifications', () => {
   it('Cp: samples outside every fitted range are drawn as their own (extrapolated) runs, joined to the fitted curve', () => {
     const sp = makeReport().species![2]!; // CO2, fitted 298–1200 K, sampled to 1500 K
