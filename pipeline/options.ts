@@ -1,5 +1,5 @@
 // Options as users write them (CLI flags, manifest) -> one complete OptionsNormalized, validated once.
-import { readFileSync, statSync } from 'node:fs';
+import { existsSync, readFileSync, statSync } from 'node:fs';
 import { basename, dirname, resolve, relative, isAbsolute } from 'node:path';
 import { InputError, excerpt } from './errors.js';
 import { COLUMN_BY_NAME } from './ingest/columns.js';
@@ -49,19 +49,12 @@ function isDirectory(path: string, manifest?: string): boolean {
 
 /** A file the manifest names must exist; if not, the message points at the manifest's line. */
 function requireListed(path: string, listedAs: string, manifest: string, field: string): void {
-  let exists = true;
-  try {
-    statSync(path);
-  } catch {
-    exists = false;
-  }
-  if (!exists) {
-    throw new InputError('missing-file', `${field} "${excerpt(listedAs)}" named in the manifest: no such file (looked for ${excerpt(path, 200)})`, {
-      file: manifest,
-      line: lineOfText(manifest, listedAs),
-      field,
-    });
-  }
+  if (existsSync(path)) return;
+  throw new InputError('missing-file', `${field} "${excerpt(listedAs)}" named in the manifest: no such file (looked for ${excerpt(path, 200)})`, {
+    file: manifest,
+    line: lineOfText(manifest, listedAs),
+    field,
+  });
 }
 
 function lineOfText(file: string, needle: string): number | undefined {

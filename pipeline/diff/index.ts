@@ -104,12 +104,12 @@ interface Loaded {
   species: Species[];
 }
 
-async function loadVersion(v: DiffVersionInput, opts: DiffOptions, run: { version: string; generatedAt: string; waiverDay?: string }): Promise<Loaded> {
+async function loadVersion(v: DiffVersionInput, opts: DiffOptions, run: { version: string; generatedAt: string; waiverDay: string }): Promise<Loaded> {
   const options = optionsFor(v, opts.failOn, opts.reactionsFile);
   let report = await check(options, run);
   const { species } = await loadSpecies(options);
   report = withDatasetFindings(report, species, { options, reference: loadReference() });
-  if (options.waiversFile) report = waiveReport(report, loadWaivers(options.waiversFile), run.waiverDay ?? run.generatedAt.slice(0, 10));
+  if (options.waiversFile) report = waiveReport(report, loadWaivers(options.waiversFile), run.waiverDay);
   return { options, report, species };
 }
 
@@ -120,7 +120,7 @@ function tableIndex(options: OptionsNormalized): (f: Finding) => number {
 
 const atOrAbove = (s: Severity, failOn: FailOn): boolean => (failOn === 'never' ? false : failOn === 'warning' ? s !== 'info' : s === 'error');
 
-export async function diffDatasets(oldV: DiffVersionInput, newV: DiffVersionInput, opts: DiffOptions, run: { version: string; generatedAt: string; waiverDay?: string }): Promise<DiffReport> {
+export async function diffDatasets(oldV: DiffVersionInput, newV: DiffVersionInput, opts: DiffOptions, run: { version: string; generatedAt: string; waiverDay: string }): Promise<DiffReport> {
   const a = await loadVersion(oldV, opts, run);
   const b = await loadVersion(newV, opts, run);
   const species = compareSpeciesLists(a.species, b.species);

@@ -136,11 +136,11 @@ class AtomicWriter {
 
 const comment = (text: string): string => `# ${inert(text)}\n`;
 
-export async function exportTables(options: OptionsNormalized, opts: ExportOptions, run: { version: string; generatedAt: string; waiverDay?: string }): Promise<ExportResult> {
+export async function exportTables(options: OptionsNormalized, opts: ExportOptions, run: { version: string; generatedAt: string; waiverDay: string }): Promise<ExportResult> {
   let report = await check(options, run);
   const { species } = await loadSpecies(options);
   report = withDatasetFindings(report, species, { options, reference: loadReference() });
-  if (options.waiversFile) report = waiveReport(report, loadWaivers(options.waiversFile), run.waiverDay ?? run.generatedAt.slice(0, 10));
+  if (options.waiversFile) report = waiveReport(report, loadWaivers(options.waiversFile), run.waiverDay);
   const drop = leftOut(report.findings, species, opts.dropOn);
 
   const reportPath = opts.reportPath ?? defaultReportPath(opts.out);

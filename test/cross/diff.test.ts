@@ -10,7 +10,7 @@ import { tempFile } from '../ingest/helpers.js';
 
 // The fixture and its planted changes are described in test/fixtures-cross/diff/README.md.
 const DIR = 'test/fixtures-cross/diff';
-const run = { version: 'test', generatedAt: '1970-01-01T00:00:00.000Z' };
+const run = { version: 'test', generatedAt: '1970-01-01T00:00:00.000Z', waiverDay: '1970-01-01' };
 const R = R_J_PER_MOL_K; // CODATA 2018, J/(mol K)
 
 const ajv = new Ajv({ allErrors: true, strict: false });

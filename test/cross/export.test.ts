@@ -11,7 +11,7 @@ import type { Species } from '../../pipeline/types.js';
 import { readReport, thermovet } from '../cli/run.js';
 import { tempFile } from '../ingest/helpers.js';
 
-const run = { version: 'test', generatedAt: '1970-01-01T00:00:00.000Z' };
+const run = { version: 'test', generatedAt: '1970-01-01T00:00:00.000Z', waiverDay: '1970-01-01' };
 const out = mkdtempSync(join(tmpdir(), 'thermovet-export-'));
 const K = 4.184; // thermochemical calorie, J, exact
 
