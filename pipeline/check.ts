@@ -8,7 +8,8 @@ import { SpeciesStore } from './records.js';
 import { speciesSummary } from './summary.js';
 import { DATASET_RULES, RULES, SPECIES_RULES } from './rules/index.js';
 import { impactOfFindings, loadReactions, runEquilibrium } from './equilibrium/index.js';
-import { CHART_SPECIES_LIMIT, type CheckContext, type Finding, type OptionsNormalized, type ReactionResult, type Report, type Species, type SpeciesSummary, type Summary } from './types.js';
+import { speciesKey } from './species-list.js';
+import { CHART_SPECIES_LIMIT, type CheckContext, type Finding, type OptionsNormalized, type ReactionResult, type Report, type Summary, type SummaryList } from './types.js';
 
 export interface RunInfo {
   version: string;
@@ -67,8 +68,9 @@ export async function check(options: OptionsNormalized, run: RunInfo): Promise<R
     accepted += counts.accepted;
     rejected += counts.rejected;
   }
-  const species = store.list();
-  for (const sp of species) {
+  const species = store.view(); // species order (name, then phase); each Species is built when asked for
+  for (let i = 0; i < species.length; i++) {
+    const sp = species.at(i);
     for (const rule of SPECIES_RULES) for (const f of rule.check!(sp, ctx)) findings.push(f);
   }
   for (const rule of DATASET_RULES) for (const f of rule.checkAll(species, ctx)) findings.push(f);
@@ -85,28 +87,25 @@ export async function check(options: OptionsNormalized, run: RunInfo): Promise<R
     for (const r of eq.resolved) for (const t of r.terms) charted.add(t.thermo.species.key);
   }
   for (const f of findings) if (f.rule.startsWith('cp-') && f.species !== undefined) charted.add(`${f.species}|${f.phase}`);
-  for (const sp of species) {
-    if (charted.size >= CHART_SPECIES_LIMIT) break;
-    if (sp.cp.length > 0) charted.add(sp.key);
+  for (let i = 0; i < species.length && charted.size < CHART_SPECIES_LIMIT; i++) {
+    if (species.cpCount(i) > 0) charted.add(speciesKey(species, i));
   }
   findings.sort(compareFindings);
   // reaction species first, then those with Cp findings, then the rest with a Cp correlation, in name order
   const chartKeys = new Set([...charted].slice(0, CHART_SPECIES_LIMIT));
   const inputs = await Promise.all([...options.tables.map((t) => t.path), ...(options.reactionsFile ? [options.reactionsFile] : [])].map((p) => fileDigest(p)));
-  // Each species is let go as soon as its summary is made, so the records and the summaries are never
-  // both whole in memory (at 10^6 rows each is several hundred MB).
-  const speciesCount = species.length;
-  store.byKey.clear();
-  const summaries = new Array<SpeciesSummary>(speciesCount);
-  for (let i = 0; i < speciesCount; i++) {
-    const sp = species[i]!;
-    summaries[i] = speciesSummary(sp, reference, options.useWindow, chartKeys.has(sp.key));
-    (species as (Species | undefined)[])[i] = undefined;
-  }
+  // The summaries are made as a writer reads them, from the species store, so at 10^6 rows the
+  // records and several hundred MB of summaries are never both in memory.
+  const summaries: SummaryList = {
+    length: species.length,
+    *[Symbol.iterator]() {
+      for (let i = 0; i < species.length; i++) yield speciesSummary(species.at(i), reference, options.useWindow, chartKeys.has(speciesKey(species, i)));
+    },
+  };
   return {
     tool: { name: 'thermovet', version: run.version },
     dataset: { name: options.name, useWindow: options.useWindow },
-    summary: summarize(rows, accepted, rejected, speciesCount, findings),
+    summary: summarize(rows, accepted, rejected, species.length, findings),
     findings,
     species: summaries,
     reactions: reactions ?? [], // always present: empty when no reactions file is given

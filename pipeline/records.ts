@@ -5,6 +5,7 @@ import { rule as duplicateRow } from './rules/duplicate-row.js';
 import { rule as badCpSpec } from './rules/bad-cp-spec.js';
 import { formatFormula } from './chemistry/formula.js';
 import { toDeclared } from './units/convert.js';
+import { arrayList, type SpeciesList } from './species-list.js';
 import type { CpSpec, Finding, RowValues, Species, SpeciesRow } from './types.js';
 
 const FIELDS = ['dHf', 'dGf', 'S'] as const;
@@ -174,6 +175,11 @@ export class SpeciesStore {
     if (sp.u.dHf === undefined && v.u_dHf !== undefined) sp.u.dHf = v.u_dHf;
     if (sp.u.dGf === undefined && v.u_dGf !== undefined) sp.u.dGf = v.u_dGf;
     if (sp.u.S === undefined && v.u_S !== undefined) sp.u.S = v.u_S;
+  }
+
+  /** The species as a list in list() order. */
+  view(): SpeciesList {
+    return arrayList(this.list());
   }
 
   /** Species in a stable order (name, then phase), each with its Cp ranges sorted. */

@@ -259,12 +259,20 @@ export interface ReactionResult {
 
 export const CHART_SPECIES_LIMIT = 200;
 
+/**
+ * The species summaries of a report, in species order. check() makes each one when it is read, so a
+ * 10^6-row report never holds them all; iterating twice makes them twice. An array is one too.
+ */
+export interface SummaryList extends Iterable<SpeciesSummary> {
+  readonly length: number;
+}
+
 export interface Report {
   tool: { name: string; version: string };
   dataset?: { name: string; useWindow: UseWindow };
   summary: Summary;
   findings: Finding[];
-  species?: SpeciesSummary[];
+  species?: SummaryList;
   reactions?: ReactionResult[];
   provenance: {
     generatedAt: string;

@@ -27,11 +27,19 @@ export function findingForJson(f: Finding): Record<string, unknown> {
 }
 
 export function renderJson(report: Report): string {
-  return JSON.stringify(report.findings ? { ...report, findings: report.findings.map(findingForJson) } : report, null, 2) + '\n';
+  const out: Record<string, unknown> = { ...report };
+  if (report.findings) out.findings = report.findings.map(findingForJson);
+  if (report.species && !Array.isArray(report.species)) out.species = [...report.species];
+  return JSON.stringify(out, null, 2) + '\n';
 }
 
 /** array elements serialised per JSON.stringify call */
 const BATCH = 512;
+
+/** An array, or a list made as it is read (Report.species from check()): written element by element. */
+function isList(v: unknown): v is { length: number } & Iterable<unknown> {
+  return Array.isArray(v) || (typeof v === 'object' && v !== null && typeof (v as { length?: unknown }).length === 'number' && Symbol.iterator in v);
+}
 
 /** JSON.stringify(value, null, 2) placed at `indent`: its inner lines shifted right (strings never hold a raw line feed). */
 function at(value: unknown, indent: string): string {
@@ -53,14 +61,21 @@ export function* jsonChunks(report: Report): Generator<string> {
     const key = keys[k]!;
     const value = (report as unknown as Record<string, unknown>)[key];
     const end = k < keys.length - 1 ? ',\n' : '\n';
-    if (Array.isArray(value) && value.length > 0) {
+    if (isList(value) && value.length === 0) {
+      yield `  ${JSON.stringify(key)}: []${end}`;
+    } else if (isList(value)) {
       yield `  ${JSON.stringify(key)}: [\n`;
       // a batch inside two arrays comes out at exactly this depth: "[\n  [\n" + elements + "\n  ]\n]"
-      for (let i = 0; i < value.length; i += BATCH) {
-        const batch = value.slice(i, i + BATCH);
-        const text = JSON.stringify([key === 'findings' ? (batch as Finding[]).map(findingForJson) : batch], null, 2);
-        yield text.slice(6, -6) + (i + BATCH < value.length ? ',\n' : '\n');
+      let batch: unknown[] = [];
+      let written = 0;
+      for (const item of value) {
+        batch.push(key === 'findings' ? findingForJson(item as Finding) : item);
+        if (batch.length < BATCH) continue;
+        written += batch.length;
+        yield JSON.stringify([batch], null, 2).slice(6, -6) + (written < value.length ? ',\n' : '\n');
+        batch = [];
       }
+      if (batch.length > 0) yield JSON.stringify([batch], null, 2).slice(6, -6) + '\n';
       yield '  ]' + end;
     } else {
       yield `  ${JSON.stringify(key)}: ${at(value, '  ')}${end}`;

@@ -17,6 +17,7 @@ import type { CheckContext, FailOn, Finding, OptionsNormalized, Report, Severity
 import { loadWaivers, waiveReport } from '../waivers.js';
 import { compareFindings, compareSpeciesLists, type SpeciesDiff } from './compare.js';
 import { lnKImpact, type ReactionDiff } from './lnk.js';
+import { arrayList } from '../species-list.js';
 
 export interface DiffVersionInput {
   path: string;
@@ -90,7 +91,7 @@ const findingId = (f: Finding): string => `${f.rule}|${f.messageId}|${f.location
  */
 export function withDatasetFindings(report: Report, species: readonly Species[], ctx: CheckContext): Report {
   const have = new Set(report.findings.map(findingId));
-  const extra = DATASET_RULES.flatMap((r) => r.checkAll(species, ctx)).filter((f) => !have.has(findingId(f)));
+  const extra = DATASET_RULES.flatMap((r) => r.checkAll(arrayList(species), ctx)).filter((f) => !have.has(findingId(f)));
   if (extra.length === 0) return report;
   const findings = [...report.findings, ...extra].sort(byLocation);
   const count = (s: Severity): number => extra.filter((f) => f.severity === s && !f.waived).length;

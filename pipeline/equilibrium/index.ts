@@ -4,6 +4,7 @@
 //   const eq = runEquilibrium(specs, species, reference, useWindow);      // results for the report
 //   impactOfFindings(allFindings, eq.resolved);                           // sets finding.impact
 import type { Finding, ReactionResult, ReferenceData, Species, UseWindow } from '../types.js';
+import type { SpeciesList } from '../species-list.js';
 import { reactionDataFindings, reactionResult } from './lnk.js';
 import { resolveReactions, type ReactionSpec, type ResolvedReaction, type SpeciesIndex } from './reactions.js';
 
@@ -32,7 +33,7 @@ export interface EquilibriumOutcome {
  */
 export function runEquilibrium(
   specs: readonly ReactionSpec[],
-  species: readonly Species[] | SpeciesIndex,
+  species: readonly Species[] | SpeciesList | SpeciesIndex,
   reference: ReferenceData,
   window: UseWindow = {},
   opts: { cpMissingOnPoints?: boolean } = {},

@@ -14,6 +14,7 @@ import { sniff } from '../ingest/sniff.js';
 import { makeFinding } from '../rules/finding.js';
 import { findUnit, unitsOf } from '../units/table.js';
 import type { Finding, Formula, Location, ReferenceData, ReactionResult, Species, UseWindow } from '../types.js';
+import { asSpeciesList, type SpeciesList } from '../species-list.js';
 import { EquationError, parseEquation, type EquationTerm } from './equation.js';
 import { reactionData, reactionRow, reactionSpecies, reactionUnbalanced } from './rules.js';
 import { reactionTemperatures } from './temperatures.js';
@@ -253,10 +254,14 @@ export class SpeciesIndex {
   private readonly byFormula = new Map<string, Species[]>();
   private readonly thermo = new Map<string, ReturnType<typeof thermoOf>>();
 
+  readonly species: SpeciesList;
+
   constructor(
-    readonly species: readonly Species[],
+    species: readonly Species[] | SpeciesList,
     readonly reference: ReferenceData,
-  ) {}
+  ) {
+    this.species = asSpeciesList(species);
+  }
 
   /** Indexes the species having any of these names or formulas, in one pass over the table. */
   prepare(names: readonly string[], formulas: readonly Formula[]): void {
@@ -277,13 +282,18 @@ export class SpeciesIndex {
       else wanted.set(sig, new Set([key]));
     }
     if (wantedNames.size === 0 && wanted.size === 0) return;
-    for (const sp of this.species) {
-      if (wantedNames.has(sp.name)) this.byName.get(sp.name)!.push(sp);
+    // a species matching both a name and a formula is built once, so both lists hold the same object
+    const list = this.species;
+    for (let i = 0; i < list.length; i++) {
+      let sp: Species | undefined;
+      const name = list.name(i);
+      if (wantedNames.has(name)) this.byName.get(name)!.push((sp = list.at(i)));
       if (wanted.size === 0) continue;
-      const keys = wanted.get(signature(sp.formula));
+      const formula = list.formula(i);
+      const keys = wanted.get(signature(formula));
       if (!keys) continue;
-      const key = formulaKey(sp.formula);
-      if (keys.has(key)) this.byFormula.get(key)!.push(sp);
+      const key = formulaKey(formula);
+      if (keys.has(key)) this.byFormula.get(key)!.push(sp ?? list.at(i));
     }
   }
 
@@ -412,7 +422,7 @@ export interface ResolveOutcome {
  * unknown or ambiguous species, an imbalance, or a species without enough formation data is reported
  * (findings carry the reaction's file and line) and not computed.
  */
-export function resolveReactions(specs: readonly ReactionSpec[], species: readonly Species[] | SpeciesIndex, reference: ReferenceData, window: UseWindow = {}): ResolveOutcome {
+export function resolveReactions(specs: readonly ReactionSpec[], species: readonly Species[] | SpeciesList | SpeciesIndex, reference: ReferenceData, window: UseWindow = {}): ResolveOutcome {
   const index = species instanceof SpeciesIndex ? species : new SpeciesIndex(species, reference);
   index.prepareFor(specs);
   const resolved: ResolvedReaction[] = [];

@@ -7,6 +7,7 @@ import { median } from 'simple-statistics';
 import { toDeclared } from '../units/convert.js';
 import type { Finding, Location, Phase, Species } from '../types.js';
 import { rowGiving, type DatasetRule } from './dataset.js';
+import { asSpeciesList, type SpeciesList } from '../species-list.js';
 import { makeFinding } from './finding.js';
 import { robustScale } from './robust.js';
 
@@ -56,39 +57,49 @@ export function theilSen(points: readonly { x: number; y: number }[]): { slope: 
   return { slope, intercept: median(points.map((p) => p.y - slope * p.x)) };
 }
 
-export function entropyAtomFindings(species: readonly Species[]): Finding[] {
+export function entropyAtomFindings(input: readonly Species[] | SpeciesList): Finding[] {
+  const list = asSpeciesList(input);
   const findings: Finding[] = [];
   for (const phase of SCREENED) {
-    const inPhase = species.filter((s) => s.phase === phase && s.S !== undefined && atomCount(s.formula) > 0);
-    for (const sp of inPhase) {
-      if (sp.S! > 0) continue;
+    // indices, S° and atom counts only: a table of 10^6 rows has ~10^5 species per phase
+    const usable: { i: number; S: number; N: number }[] = [];
+    for (let i = 0; i < list.length; i++) {
+      if (list.phase(i) !== phase) continue;
+      const S = list.S(i);
+      if (S === undefined) continue;
+      const N = atomCount(list.formula(i));
+      if (N <= 0) continue;
+      if (S > 0) {
+        usable.push({ i, S, N });
+        continue;
+      }
+      const sp = list.at(i);
       const unit = sp.units.S ?? 'J/(mol K)';
-      findings.push(makeFinding(rule, 'nonpositive', { value: round(toDeclared(sp.S!, 'S', unit)), unit, phase }, where(sp), { species: sp.name, phase }));
+      findings.push(makeFinding(rule, 'nonpositive', { value: round(toDeclared(S, 'S', unit)), unit, phase }, where(sp), { species: sp.name, phase }));
     }
-    const usable = inPhase.filter((s) => s.S! > 0);
     // one point per atom count (the median of ln S°), so a crowd of similar species does not outvote the rest
     const byN = new Map<number, number[]>();
-    for (const sp of usable) {
-      const N = atomCount(sp.formula);
-      const list = byN.get(N);
-      if (list) list.push(Math.log(sp.S!));
-      else byN.set(N, [Math.log(sp.S!)]);
+    for (const u of usable) {
+      const ys = byN.get(u.N);
+      if (ys) ys.push(Math.log(u.S));
+      else byN.set(u.N, [Math.log(u.S)]);
     }
     if (usable.length < MIN_SPECIES || byN.size < MIN_ATOM_COUNTS) continue;
     const line = theilSen([...byN].map(([N, ys]) => ({ x: Math.log(N), y: median(ys) })));
-    const predict = (sp: Species): number => line.intercept + line.slope * Math.log(atomCount(sp.formula));
-    const resid = usable.map((sp) => Math.log(sp.S!) - predict(sp));
+    const predict = (N: number): number => line.intercept + line.slope * Math.log(N);
+    const resid = usable.map((u) => Math.log(u.S) - predict(u.N));
     const scale = robustScale(resid, LOG_SCALE_FLOOR);
-    usable.forEach((sp, i) => {
-      if (Math.abs(resid[i]!) <= ATOMS_Z * scale) return;
+    usable.forEach((u, k) => {
+      if (Math.abs(resid[k]!) <= ATOMS_Z * scale) return;
+      const sp = list.at(u.i);
       const unit = sp.units.S ?? 'J/(mol K)';
       const params = {
-        value: round(toDeclared(sp.S!, 'S', unit)),
+        value: round(toDeclared(u.S, 'S', unit)),
         unit,
         phase,
-        atoms: atomCount(sp.formula),
-        expected: round(toDeclared(Math.exp(predict(sp)), 'S', unit)),
-        factor: round(Math.exp(Math.abs(resid[i]!))),
+        atoms: u.N,
+        expected: round(toDeclared(Math.exp(predict(u.N)), 'S', unit)),
+        factor: round(Math.exp(Math.abs(resid[k]!))),
         count: usable.length,
       };
       findings.push(makeFinding(rule, 'off', params, where(sp), { species: sp.name, phase }));

@@ -15,6 +15,7 @@ import { formatFormula } from '../chemistry/formula.js';
 import { toDeclared } from '../units/convert.js';
 import type { Finding, Location, Phase, Rule, Species } from '../types.js';
 import { rowGiving, type DatasetRule } from './dataset.js';
+import { asSpeciesList, type SpeciesList } from '../species-list.js';
 import { makeFinding } from './finding.js';
 import { fitLine, lineAt, robustScale } from './robust.js';
 
@@ -52,7 +53,9 @@ export const rule: DatasetRule = {
 
 export interface SeriesMember {
   n: number; // carbon count
-  species: Species;
+  /** index into the species list */
+  index: number;
+  name: string;
 }
 
 export interface Series {
@@ -68,7 +71,7 @@ const STRAIGHT = /^(n-|n |1-|normal[- ])/i;
 const BRANCHED = /iso|neo|tert|sec-|cyclo|methyl|ethyl[a-z]|\b[2-9]-|,/i;
 
 /** One species per carbon count: the only one, else the one named as a straight chain; undefined when it cannot be told. */
-function pickIsomer(cands: Species[]): Species | undefined {
+function pickIsomer<T extends { name: string }>(cands: T[]): T | undefined {
   if (cands.length === 1) return cands[0];
   const straight = cands.filter((s) => STRAIGHT.test(s.name));
   if (straight.length === 1) return straight[0];
@@ -86,29 +89,33 @@ function generalFormula(h: number, rest: string): string {
  * H − 2·C. Carbon counts must be whole; where several isomers share a carbon count and the names do
  * not say which is the straight chain, that count is left out of the series.
  */
-export function findSeries(species: readonly Species[]): Series[] {
-  const groups = new Map<string, { phase: Phase; label: string; byN: Map<number, Species[]> }>();
-  for (const sp of species) {
-    const C = sp.formula.elements.C;
-    const H = sp.formula.elements.H;
+export function findSeries(input: readonly Species[] | SpeciesList): Series[] {
+  const list = asSpeciesList(input);
+  const groups = new Map<string, { phase: Phase; label: string; byN: Map<number, { index: number; name: string }[]> }>();
+  for (let i = 0; i < list.length; i++) {
+    const formula = list.formula(i);
+    const C = formula.elements.C;
+    const H = formula.elements.H;
     if (C === undefined || H === undefined || !Number.isInteger(C) || !Number.isInteger(H) || C < 1) continue;
     const restEls: Record<string, number> = {};
-    for (const [el, k] of Object.entries(sp.formula.elements)) if (el !== 'C' && el !== 'H') restEls[el] = k;
-    const rest = formatFormula({ elements: restEls, charge: sp.formula.charge });
+    for (const [el, k] of Object.entries(formula.elements)) if (el !== 'C' && el !== 'H') restEls[el] = k;
+    const rest = formatFormula({ elements: restEls, charge: formula.charge });
     const h = H - 2 * C;
-    const key = `${sp.phase}|${h}|${rest}`;
+    const phase = list.phase(i);
+    const key = `${phase}|${h}|${rest}`;
     let g = groups.get(key);
-    if (!g) groups.set(key, (g = { phase: sp.phase, label: generalFormula(h, rest), byN: new Map() }));
+    if (!g) groups.set(key, (g = { phase, label: generalFormula(h, rest), byN: new Map() }));
+    const cand = { index: i, name: list.name(i) };
     const at = g.byN.get(C);
-    if (at) at.push(sp);
-    else g.byN.set(C, [sp]);
+    if (at) at.push(cand);
+    else g.byN.set(C, [cand]);
   }
   const out: Series[] = [];
   for (const g of groups.values()) {
     const members: SeriesMember[] = [];
     for (const [n, cands] of g.byN) {
       const sp = pickIsomer(cands);
-      if (sp) members.push({ n, species: sp });
+      if (sp) members.push({ n, index: sp.index, name: sp.name });
     }
     if (members.length < MIN_FITTED + 1) continue;
     members.sort((a, b) => a.n - b.n);
@@ -169,18 +176,23 @@ function where(sp: Species, field: TrendField): Location {
   return loc;
 }
 
-export function familyTrendFindings(species: readonly Species[]): Finding[] {
+export function familyTrendFindings(input: readonly Species[] | SpeciesList): Finding[] {
+  const list = asSpeciesList(input);
   const findings: Finding[] = [];
-  for (const series of findSeries(species)) {
-    const fitted = series.members.slice(1); // the first member is set aside (file comment)
+  for (const series of findSeries(list)) {
+    // the first member is set aside (file comment); each member's values and stated uncertainties, read once
+    const fitted = series.members.slice(1).map((m) => {
+      const sp = list.at(m.index);
+      const u = (field: TrendField) => rowGiving(sp, field)?.[field === 'dHf' ? 'u_dHf' : 'u_S'] ?? 0;
+      return { m, dHf: sp.dHf, S: sp.S, u: { dHf: u('dHf'), S: u('S') } };
+    });
     for (const field of FIELDS) {
-      const uKey = field === 'dHf' ? 'u_dHf' : 'u_S';
-      const have = fitted.filter((m) => m.species[field] !== undefined);
+      const have = fitted.filter((f) => f[field] !== undefined);
       if (have.length < MIN_FITTED) continue;
-      const points = have.map((m) => ({ x: m.n, y: m.species[field]!, u: rowGiving(m.species, field)?.[uKey] ?? 0 }));
+      const points = have.map((f) => ({ x: f.m.n, y: f[field]!, u: f.u[field] }));
       for (const o of offTrend(points, SCALE_FLOOR[field])) {
-        const m = have[o.index]!;
-        const sp = m.species;
+        const m = have[o.index]!.m;
+        const sp = list.at(m.index);
         const unit = sp.units[field] ?? DISPLAY[field].unit;
         const per = DISPLAY[field].per;
         const params = {

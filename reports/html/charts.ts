@@ -152,12 +152,15 @@ export const GIBBS_BAR_LIMIT = 60;
  * Gibbs–Helmholtz residuals across species, largest first, on a symmetric-log axis so that 0.01 and
  * 200 kJ/mol both read; the warning and error tolerances drawn as dashed rules.
  */
-export function gibbsChartSpec(species: SpeciesSummary[], tol: Tolerance): { spec: TopLevelSpec; shown: number; total: number } | undefined {
-  const withResidual = species.filter((s) => typeof s.gibbsResidual === 'number' && Number.isFinite(s.gibbsResidual));
+export function gibbsChartSpec(species: Iterable<SpeciesSummary>, tol: Tolerance): { spec: TopLevelSpec; shown: number; total: number } | undefined {
+  const withResidual: { label: string; residual: number }[] = []; // labels and numbers only: the summaries may be made as they are read
+  for (const s of species) {
+    if (typeof s.gibbsResidual === 'number' && Number.isFinite(s.gibbsResidual)) withResidual.push({ label: speciesLabel(s), residual: s.gibbsResidual });
+  }
   if (withResidual.length === 0) return undefined;
   const status = (r: number): string => (Math.abs(r) > tol.errorKJ ? 'above the error tolerance' : Math.abs(r) > tol.warningKJ ? 'above the warning tolerance' : 'within tolerance');
   const rows = withResidual
-    .map((s) => ({ label: speciesLabel(s), residual: s.gibbsResidual!, status: status(s.gibbsResidual!) }))
+    .map((s) => ({ label: s.label, residual: s.residual, status: status(s.residual) }))
     .sort((a, b) => Math.abs(b.residual) - Math.abs(a.residual) || (a.label < b.label ? -1 : a.label > b.label ? 1 : 0))
     .slice(0, GIBBS_BAR_LIMIT);
   const rules = [-tol.errorKJ, -tol.warningKJ, tol.warningKJ, tol.errorKJ].map((v) => ({ v }));

@@ -195,7 +195,13 @@ export async function renderHtml(report: Report, opts: HtmlOptions = {}): Promis
   const reactions = report.reactions ?? [];
   const useWindow = report.dataset?.useWindow;
   const tol = tolerancesOf(report);
-  const cpSpecies = species.filter((s) => (s.cp?.samples?.length ?? 0) >= 2).slice(0, CHART_SPECIES_LIMIT);
+  // one pass over the summaries (check() makes them as they are read): the charted ones kept, the rest counted
+  const cpSpecies: SpeciesSummary[] = [];
+  let withCp = 0;
+  for (const s of species) {
+    if (s.cp) withCp++;
+    if (cpSpecies.length < CHART_SPECIES_LIMIT && (s.cp?.samples?.length ?? 0) >= 2) cpSpecies.push(s);
+  }
   const chartAnchor = new Map<string, string>();
   cpSpecies.forEach((s, i) => chartAnchor.set(`${s.name}|${s.phase}`, `cp-${i + 1}`));
 
@@ -285,7 +291,6 @@ export async function renderHtml(report: Report, opts: HtmlOptions = {}): Promis
 
   if (cpSpecies.length) {
     const win = windowSpan(useWindow);
-    const withCp = species.filter((s) => s.cp).length;
     out.push('<section id="cp"><h2>Heat capacity</h2>');
     out.push(
       `<p class="note">Cp against T as each species’ correlation gives it: solid where a fitted range covers T, dashed where it is extrapolated. ${

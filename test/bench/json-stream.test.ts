@@ -41,6 +41,23 @@ describe('streamed JSON report', () => {
     }
   });
 
+  it('writes species summaries made as they are read (check() gives a list, not an array) like an array of them', async () => {
+    const report = await check(normalizeOptions({ tables: [], manifest: 'datasets/demo/manifest.yaml' }), { version: '0.0.0', generatedAt: '1970-01-01T00:00:00.000Z' });
+    expect(Array.isArray(report.species)).toBe(false);
+    const asArray = { ...report, species: [...report.species!] };
+    expect(asArray.species.length).toBe(report.species!.length);
+    expect(asArray.species.map((s) => s.name)).toContain('CO2');
+    expect([...jsonChunks(report)].join('')).toBe(renderJson(asArray));
+    expect(renderJson(report)).toBe(renderJson(asArray));
+    // a list longer than one batch, and an empty one
+    const summary = asArray.species[0]!;
+    for (const n of [0, 512, 700]) {
+      const list = { length: n, *[Symbol.iterator]() { for (let i = 0; i < n; i++) yield { ...summary, key: `s${i}` }; } };
+      const arr = [...list];
+      expect([...jsonChunks({ ...report, species: list })].join('')).toBe(renderJson({ ...report, species: arr }));
+    }
+  });
+
   it('reports an unwritable path as exit-2 input error and leaves no file behind', () => {
     const blocker = join(dir, 'a-file');
     writeFileSync(blocker, 'x');

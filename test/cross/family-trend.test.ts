@@ -43,7 +43,7 @@ async function trend(csv: string) {
 describe('family-trend on published homologous series', () => {
   it('finds the n-alkane and 1-alkanol series and flags nothing in the clean data', async () => {
     const { findings, series } = await trend(table([...ALKANES, ISOBUTANE]));
-    expect(series.map((s) => [s.label, s.members.map((m) => m.species.name)])).toEqual([
+    expect(series.map((s) => [s.label, s.members.map((m) => m.name)])).toEqual([
       ['CnH2n+2', ['CH4', 'C2H6', 'C3H8', 'n-butane', 'n-pentane', 'n-hexane', 'n-heptane']],
       ['CnH2n+2O', ['methanol', 'ethanol', '1-propanol', '1-butanol', '1-pentanol']],
     ]);
