@@ -1,4 +1,7 @@
-// Fold accepted rows into one compact record per species and phase; rows are not kept.
+// Fold accepted rows into one record per species and phase; rows are not kept. The records live in
+// columns (columns.ts): a number per field per species, value row and Cp range, strings interned, so
+// 10^6 rows fold into ~100 MB instead of a JavaScript object graph of ~1 GB. `at` builds the Species
+// object the rules read, one at a time; nothing keeps it.
 import { makeFinding } from './rules/finding.js';
 import { rule as conflictingValues } from './rules/conflicting-values.js';
 import { rule as duplicateRow } from './rules/duplicate-row.js';
@@ -6,7 +9,8 @@ import { rule as badCpSpec } from './rules/bad-cp-spec.js';
 import { formatFormula } from './chemistry/formula.js';
 import { toDeclared } from './units/convert.js';
 import { arrayList, type SpeciesList } from './species-list.js';
-import type { CpSpec, Finding, RowValues, Species, SpeciesRow } from './types.js';
+import { F64Column, fromCell, I32Column, Interned, toCell } from './columns.js';
+import { CP_MODELS, PHASES, type CpModelName, type CpSpec, type Finding, type Formula, type Phase, type RowValues, type Species, type SpeciesRow } from './types.js';
 
 const FIELDS = ['dHf', 'dGf', 'S'] as const;
 /** Published correlations use 1–10 ranges per species; past this many, further ranges are refused (each
@@ -25,10 +29,6 @@ function sameCp(a: CpSpec, b: CpSpec): boolean {
 }
 
 /** Rows without a source text are attributed to their file, so files merged into one run stay apart (as cross-source reads them). */
-function sameSource(a: RowValues, b: RowValues): boolean {
-  return a.source === b.source && (a.source !== '' || a.location.file === b.location.file);
-}
-
 function sourceKey(v: RowValues): string {
   return v.source !== '' ? `s:${v.source}` : `f:${v.location.file}`;
 }
@@ -37,7 +37,7 @@ function rangeKey(c: CpSpec): string {
   return `${c.model}|${c.Tmin}|${c.Tmax}`;
 }
 
-function push<T>(map: Map<string, T[]>, key: string, item: T): void {
+function push<K, T>(map: Map<K, T[]>, key: K, item: T): void {
   const list = map.get(key);
   if (list) list.push(item);
   else map.set(key, [item]);
@@ -47,55 +47,95 @@ function hasValues(v: RowValues): boolean {
   return v.dHf !== undefined || v.dGf !== undefined || v.S !== undefined;
 }
 
-function formulaKey(s: { formula: { elements: Record<string, number>; charge: number } }): string {
-  return formatFormula(s.formula);
+
+/** The optional numbers of a value row, in the order RowValues lists them; P_ref is always given. */
+const VALUE_COLUMNS = ['dHf', 'dGf', 'S', 'u_dHf', 'u_dGf', 'u_S'] as const;
+
+/** Formation values as rows gave them: one entry per kept row, chained per species in input order. */
+class ValueRows {
+  readonly num = VALUE_COLUMNS.map(() => new F64Column());
+  readonly P_ref = new F64Column();
+  readonly source = new I32Column();
+  readonly file = new I32Column();
+  readonly line = new I32Column();
+  readonly next = new I32Column();
+}
+
+/** Cp ranges as rows declared them: coefficients, exponents and listed temperatures in one number pool. */
+class CpRows {
+  readonly model = new I32Column();
+  readonly unit = new I32Column();
+  readonly unitFactor = new F64Column();
+  readonly Tmin = new F64Column();
+  readonly Tmax = new F64Column();
+  readonly start = new I32Column(); // coefficients at pool[start, start + count)
+  readonly count = new I32Column();
+  readonly exponents = new I32Column(); // start in the pool, or −1
+  readonly temps = new I32Column(); // start in the pool, or −1
+  readonly file = new I32Column();
+  readonly line = new I32Column();
+  readonly next = new I32Column();
+  readonly pool = new F64Column();
+}
+
+/** One entry per species and phase, in order of first appearance. */
+class SpeciesRows {
+  readonly name: string[] = [];
+  readonly formulaText: string[] = [];
+  readonly formula: Formula[] = [];
+  readonly phase = new I32Column();
+  readonly state = new I32Column(); // interned text, or −1
+  readonly table = new I32Column(); // the first row's columns and units
+  readonly file = new I32Column(); // the first row's location
+  readonly line = new I32Column();
+  readonly P_ref = new F64Column();
+  /** the values the record takes (the first row giving each), then their uncertainties */
+  readonly num = VALUE_COLUMNS.map(() => new F64Column());
+  readonly values = { head: new I32Column(), tail: new I32Column(), count: new I32Column() };
+  readonly cp = { head: new I32Column(), tail: new I32Column(), count: new I32Column() };
+  /** the next species with the same name (another phase), or −1 */
+  readonly sameName = new I32Column();
 }
 
 export class SpeciesStore {
-  readonly byKey = new Map<string, Species>();
+  private readonly sp = new SpeciesRows();
+  private readonly vals = new ValueRows();
+  private readonly cps = new CpRows();
+  private readonly byName = new Map<string, number>(); // name -> a species of that name (others chained)
+  private readonly files = new Interned<string>();
+  private readonly texts = new Interned<string>(); // sources, Cp units, state words
+  private readonly tables = new Interned<Record<string, number>>(); // a table's columns object
+  private readonly tableUnits: Record<string, string>[] = [];
+
+  get size(): number {
+    return this.sp.name.length;
+  }
 
   /** Adds an accepted row; returns findings about how it relates to earlier rows of the same species. */
   add(row: SpeciesRow): Finding[] {
-    const key = `${row.species}|${row.phase}`;
     const v = row.values;
-    const sp = this.byKey.get(key);
-    if (!sp) {
-      const created: Species = {
-        key,
-        name: row.species,
-        formulaText: row.formulaText,
-        formula: row.formula,
-        phase: row.phase,
-        u: {},
-        P_ref: v.P_ref,
-        values: hasValues(v) ? [v] : [],
-        cp: row.cp ? [row.cp] : [],
-        location: v.location,
-        columns: row.columns,
-        units: row.units,
-      };
-      if (row.state) created.state = row.state;
-      this.takeValues(created, v);
-      this.byKey.set(key, created);
+    const s = this.find(row.species, row.phase);
+    if (s < 0) {
+      this.create(row);
       return [];
     }
-    const ids = { species: sp.name, phase: sp.phase };
+    const ids = { species: row.species, phase: row.phase };
     const findings: Finding[] = [];
-    if (formulaKey(row) !== formulaKey(sp)) {
-      findings.push(makeFinding(conflictingValues, 'formula', { formula: row.formulaText, first: sp.formulaText, firstLine: sp.location.line }, { ...v.location, column: row.columns.formula ?? row.columns.species, field: 'formula' }, ids));
+    if (formatFormula(row.formula) !== formatFormula(this.sp.formula[s]!)) {
+      findings.push(makeFinding(conflictingValues, 'formula', { formula: row.formulaText, first: this.sp.formulaText[s]!, firstLine: this.sp.line.get(s) }, { ...v.location, column: row.columns.formula ?? row.columns.species, field: 'formula' }, ids));
     }
     // exact repeat of an earlier row: same values from the same source, same Cp range (or none)
-    const sameSourceRows = this.rowsOfSource(sp, v);
+    const sameSourceRows = this.rowsOfSource(s, v);
     const twin = sameSourceRows.find((e) => FIELDS.every((f) => same(e[f], v[f])));
-    const cpTwin = row.cp ? this.cpOfRange(sp, row.cp).find((c) => sameCp(c, row.cp!)) : undefined;
+    const cpTwin = row.cp ? this.cpOfRange(s, row.cp).find((c) => sameCp(c, row.cp!)) : undefined;
     if ((hasValues(v) ? twin : true) && (row.cp ? cpTwin : !hasValues(v) || twin) && (twin || cpTwin)) {
       const first = (cpTwin ?? twin)!.location;
-      findings.push(makeFinding(duplicateRow, 'repeat', { firstLine: first.line, firstFile: first.file, species: sp.name, phase: sp.phase }, v.location, ids));
+      findings.push(makeFinding(duplicateRow, 'repeat', { firstLine: first.line, firstFile: first.file, species: row.species, phase: row.phase }, v.location, ids));
       return findings;
     }
     if (row.cp && !cpTwin) {
-      if (sp.cp.length < MAX_CP_RANGES) this.addCp(sp, row.cp);
-      else findings.push(makeFinding(badCpSpec, 'tooMany', { max: MAX_CP_RANGES, species: sp.name }, { ...v.location, column: row.columns.cp_Tmin, field: 'cp_Tmin' }, ids));
+      if (this.sp.cp.count.get(s) < MAX_CP_RANGES) this.addCp(s, row.cp);
+      else findings.push(makeFinding(badCpSpec, 'tooMany', { max: MAX_CP_RANGES, species: row.species }, { ...v.location, column: row.columns.cp_Tmin, field: 'cp_Tmin' }, ids));
     }
     if (!hasValues(v) || twin) return findings;
     // the same source giving another number for the same field is a conflict with its first row;
@@ -111,81 +151,249 @@ export class SpeciesStore {
         }
       }
     }
-    this.addValues(sp, v);
-    this.takeValues(sp, v);
+    this.addValues(s, v);
+    this.takeValues(s, v);
     return findings;
   }
 
-  // Lookups of earlier rows by source and by Cp range. Small lists are scanned; a species with many rows
+  private find(name: string, phase: Phase): number {
+    const p = PHASES.indexOf(phase);
+    let s = this.byName.get(name) ?? -1;
+    while (s >= 0 && this.sp.phase.get(s) !== p) s = this.sp.sameName.get(s);
+    return s;
+  }
+
+  private create(row: SpeciesRow): void {
+    const sp = this.sp;
+    const s = sp.name.length;
+    const v = row.values;
+    sp.name.push(row.species);
+    sp.formulaText.push(row.formulaText);
+    sp.formula.push(row.formula);
+    sp.phase.push(PHASES.indexOf(row.phase));
+    sp.state.push(row.state ? this.texts.id(row.state) : -1);
+    const t = this.tables.id(row.columns);
+    if (t === this.tableUnits.length) this.tableUnits.push(row.units);
+    sp.table.push(t);
+    sp.file.push(this.files.id(v.location.file));
+    sp.line.push(v.location.line);
+    sp.P_ref.push(v.P_ref);
+    for (const c of sp.num) c.push(NaN);
+    for (const list of [sp.values, sp.cp]) {
+      list.head.push(-1);
+      list.tail.push(-1);
+      list.count.push(0);
+    }
+    sp.sameName.push(this.byName.get(row.species) ?? -1);
+    this.byName.set(row.species, s);
+    if (hasValues(v)) this.addValues(s, v);
+    if (row.cp) this.addCp(s, row.cp);
+    this.takeValues(s, v);
+  }
+
+  // --- value rows and Cp ranges, chained per species in input order
+
+  private addValues(s: number, v: RowValues): void {
+    const r = this.vals;
+    const i = r.P_ref.push(v.P_ref);
+    VALUE_COLUMNS.forEach((f, k) => r.num[k]!.push(toCell(v[f])));
+    r.source.push(this.texts.id(v.source));
+    r.file.push(this.files.id(v.location.file));
+    r.line.push(v.location.line);
+    r.next.push(-1);
+    const count = this.link(this.sp.values, r.next, s, i);
+    if (count > SpeciesStore.SCAN) this.valueMap(s).push(i); // the map, once built, is kept up to date
+  }
+
+  private addCp(s: number, c: CpSpec): void {
+    const r = this.cps;
+    const i = r.model.push(CP_MODELS.indexOf(c.model));
+    r.unit.push(this.texts.id(c.unit));
+    r.unitFactor.push(c.unitFactor);
+    r.Tmin.push(c.Tmin);
+    r.Tmax.push(c.Tmax);
+    r.start.push(this.pool(c.coeffs));
+    r.count.push(c.coeffs.length);
+    r.exponents.push(c.exponents ? this.pool(c.exponents) : -1);
+    r.temps.push(c.temps ? this.pool(c.temps) : -1);
+    r.file.push(this.files.id(c.location.file));
+    r.line.push(c.location.line);
+    r.next.push(-1);
+    const count = this.link(this.sp.cp, r.next, s, i);
+    if (count > SpeciesStore.SCAN) this.cpMap(s).push(i);
+  }
+
+  private pool(xs: readonly number[]): number {
+    const start = this.cps.pool.length;
+    for (const x of xs) this.cps.pool.push(x);
+    return start;
+  }
+
+  /** Appends entry i to species s's chain; returns the chain's new length. */
+  private link(list: SpeciesRows['values'], next: I32Column, s: number, i: number): number {
+    const tail = list.tail.get(s);
+    if (tail < 0) list.head.set(s, i);
+    else next.set(tail, i);
+    list.tail.set(s, i);
+    const count = list.count.get(s) + 1;
+    list.count.set(s, count);
+    return count;
+  }
+
+  private chain(head: number, next: I32Column): number[] {
+    const out: number[] = [];
+    for (let i = head; i >= 0; i = next.get(i)) out.push(i);
+    return out;
+  }
+
+  private valueRow(i: number): RowValues {
+    const r = this.vals;
+    const v: RowValues = { P_ref: r.P_ref.get(i), source: this.texts.get(r.source.get(i)), location: { file: this.files.get(r.file.get(i)), line: r.line.get(i) } };
+    VALUE_COLUMNS.forEach((f, k) => {
+      const x = fromCell(r.num[k]!.get(i));
+      if (x !== undefined) v[f] = x;
+    });
+    return v;
+  }
+
+  private cpRow(i: number): CpSpec {
+    const r = this.cps;
+    const n = r.count.get(i);
+    const numbers = (start: number): number[] => {
+      const out = new Array<number>(n);
+      for (let k = 0; k < n; k++) out[k] = r.pool.get(start + k);
+      return out;
+    };
+    const c: CpSpec = {
+      model: CP_MODELS[r.model.get(i)] as CpModelName,
+      coeffs: numbers(r.start.get(i)),
+      unit: this.texts.get(r.unit.get(i)),
+      unitFactor: r.unitFactor.get(i),
+      Tmin: r.Tmin.get(i),
+      Tmax: r.Tmax.get(i),
+      location: { file: this.files.get(r.file.get(i)), line: r.line.get(i) },
+    };
+    if (r.exponents.get(i) >= 0) c.exponents = numbers(r.exponents.get(i));
+    if (r.temps.get(i) >= 0) c.temps = numbers(r.temps.get(i));
+    return c;
+  }
+
+  // Lookups of earlier rows by source and by Cp range. Short chains are walked; a species with many rows
   // (a hostile or generated table repeating one species 10^5 times) gets an index, so folding stays linear.
   private static readonly SCAN = 16;
-  private readonly valueIndex = new WeakMap<Species, Map<string, RowValues[]>>();
-  private readonly cpIndex = new WeakMap<Species, Map<string, CpSpec[]>>();
+  private readonly valueIndex = new Map<number, Map<string, number[]>>();
+  private readonly cpIndex = new Map<number, Map<string, number[]>>();
 
-  private rowsOfSource(sp: Species, v: RowValues): RowValues[] {
-    if (sp.values.length <= SpeciesStore.SCAN) return sp.values.filter((e) => sameSource(e, v));
-    return this.valueMap(sp).get(sourceKey(v)) ?? [];
-  }
-
-  private addValues(sp: Species, v: RowValues): void {
-    sp.values.push(v);
-    if (sp.values.length <= SpeciesStore.SCAN) return;
-    const map = this.valueMap(sp);
-    if (sp.values.length === SpeciesStore.SCAN + 1) return; // just built, v included
-    push(map, sourceKey(v), v);
-  }
-
-  private valueMap(sp: Species): Map<string, RowValues[]> {
-    let map = this.valueIndex.get(sp);
-    if (!map) {
-      map = new Map();
-      for (const e of sp.values) push(map, sourceKey(e), e);
-      this.valueIndex.set(sp, map);
+  private rowsOfSource(s: number, v: RowValues): RowValues[] {
+    const r = this.vals;
+    if (this.sp.values.count.get(s) > SpeciesStore.SCAN) return (this.valueIndex.get(s)!.get(sourceKey(v)) ?? []).map((i) => this.valueRow(i));
+    const source = this.texts.id(v.source);
+    const file = this.files.id(v.location.file);
+    const out: RowValues[] = [];
+    for (let i = this.sp.values.head.get(s); i >= 0; i = r.next.get(i)) {
+      if (r.source.get(i) === source && (v.source !== '' || r.file.get(i) === file)) out.push(this.valueRow(i));
     }
-    return map;
+    return out;
   }
 
-  private cpOfRange(sp: Species, c: CpSpec): CpSpec[] {
-    if (sp.cp.length <= SpeciesStore.SCAN) return sp.cp;
-    return this.cpMap(sp).get(rangeKey(c)) ?? [];
+  private cpOfRange(s: number, c: CpSpec): CpSpec[] {
+    if (this.sp.cp.count.get(s) > SpeciesStore.SCAN) return (this.cpIndex.get(s)!.get(rangeKey(c)) ?? []).map((i) => this.cpRow(i));
+    return this.chain(this.sp.cp.head.get(s), this.cps.next).map((i) => this.cpRow(i));
   }
 
-  private addCp(sp: Species, c: CpSpec): void {
-    sp.cp.push(c);
-    if (sp.cp.length <= SpeciesStore.SCAN) return;
-    const map = this.cpMap(sp);
-    if (sp.cp.length === SpeciesStore.SCAN + 1) return;
-    push(map, rangeKey(c), c);
-  }
-
-  private cpMap(sp: Species): Map<string, CpSpec[]> {
-    let map = this.cpIndex.get(sp);
+  /** A pusher into species s's value index, built from its rows the first time it is needed. */
+  private valueMap(s: number): { push(i: number): void } {
+    let map = this.valueIndex.get(s);
     if (!map) {
-      map = new Map();
-      for (const c of sp.cp) push(map, rangeKey(c), c);
-      this.cpIndex.set(sp, map);
+      const built = new Map<string, number[]>();
+      for (const i of this.chain(this.sp.values.head.get(s), this.vals.next)) push(built, sourceKey(this.valueRow(i)), i);
+      this.valueIndex.set(s, built);
+      return { push: () => undefined }; // just built, the new row included
     }
-    return map;
+    return { push: (i) => push(map!, sourceKey(this.valueRow(i)), i) };
   }
 
-  private takeValues(sp: Species, v: RowValues): void {
-    if (sp.dHf === undefined && v.dHf !== undefined) sp.dHf = v.dHf;
-    if (sp.dGf === undefined && v.dGf !== undefined) sp.dGf = v.dGf;
-    if (sp.S === undefined && v.S !== undefined) sp.S = v.S;
-    if (sp.u.dHf === undefined && v.u_dHf !== undefined) sp.u.dHf = v.u_dHf;
-    if (sp.u.dGf === undefined && v.u_dGf !== undefined) sp.u.dGf = v.u_dGf;
-    if (sp.u.S === undefined && v.u_S !== undefined) sp.u.S = v.u_S;
+  private cpMap(s: number): { push(i: number): void } {
+    let map = this.cpIndex.get(s);
+    if (!map) {
+      const built = new Map<string, number[]>();
+      for (const i of this.chain(this.sp.cp.head.get(s), this.cps.next)) push(built, rangeKey(this.cpRow(i)), i);
+      this.cpIndex.set(s, built);
+      return { push: () => undefined };
+    }
+    return { push: (i) => push(map!, rangeKey(this.cpRow(i)), i) };
   }
 
-  /** The species as a list in list() order. */
+  /** The record takes each value (and each uncertainty) from the first row giving it. */
+  private takeValues(s: number, v: RowValues): void {
+    VALUE_COLUMNS.forEach((f, k) => {
+      const col = this.sp.num[k]!;
+      if (Number.isNaN(col.get(s)) && v[f] !== undefined) col.set(s, v[f]);
+    });
+  }
+
+  /** Species s (in order of first appearance) as the rules read it, built afresh; Cp ranges sorted by Tmin. */
+  at(s: number): Species {
+    const sp = this.sp;
+    const name = sp.name[s]!;
+    const phase = PHASES[sp.phase.get(s)]!;
+    const t = sp.table.get(s);
+    const out: Species = {
+      key: `${name}|${phase}`,
+      name,
+      formulaText: sp.formulaText[s]!,
+      formula: sp.formula[s]!,
+      phase,
+      u: {},
+      P_ref: sp.P_ref.get(s),
+      values: this.chain(sp.values.head.get(s), this.vals.next).map((i) => this.valueRow(i)),
+      cp: this.chain(sp.cp.head.get(s), this.cps.next).map((i) => this.cpRow(i)).sort((a, b) => a.Tmin - b.Tmin),
+      location: { file: this.files.get(sp.file.get(s)), line: sp.line.get(s) },
+      columns: this.tables.get(t),
+      units: this.tableUnits[t]!,
+    };
+    const state = sp.state.get(s);
+    if (state >= 0) out.state = this.texts.get(state);
+    const [dHf, dGf, S, uH, uG, uS] = sp.num.map((c) => fromCell(c.get(s)));
+    if (dHf !== undefined) out.dHf = dHf;
+    if (dGf !== undefined) out.dGf = dGf;
+    if (S !== undefined) out.S = S;
+    if (uH !== undefined) out.u.dHf = uH;
+    if (uG !== undefined) out.u.dGf = uG;
+    if (uS !== undefined) out.u.S = uS;
+    return out;
+  }
+
+  /** The species in a stable order (name, then phase), each built when asked for. */
   view(): SpeciesList {
-    return arrayList(this.list());
+    const sp = this.sp;
+    const n = this.size;
+    const order = Array.from({ length: n }, (_, i) => i);
+    const phaseOf = (i: number): string => PHASES[sp.phase.get(i)]!;
+    order.sort((a, b) => {
+      const na = sp.name[a]!;
+      const nb = sp.name[b]!;
+      if (na !== nb) return na < nb ? -1 : 1;
+      const pa = phaseOf(a);
+      const pb = phaseOf(b);
+      return pa < pb ? -1 : pa > pb ? 1 : 0;
+    });
+    const ix = Int32Array.from(order);
+    const S = sp.num[VALUE_COLUMNS.indexOf('S')]!;
+    return {
+      length: n,
+      at: (i) => this.at(ix[i]!),
+      name: (i) => sp.name[ix[i]!]!,
+      phase: (i) => PHASES[sp.phase.get(ix[i]!)]!,
+      formula: (i) => sp.formula[ix[i]!]!,
+      S: (i) => fromCell(S.get(ix[i]!)),
+      cpCount: (i) => sp.cp.count.get(ix[i]!),
+    };
   }
 
-  /** Species in a stable order (name, then phase), each with its Cp ranges sorted. */
+  /** Every species built, in view() order: for small tables (the lnk, diff and export commands, tests). */
   list(): Species[] {
-    const all = [...this.byKey.values()];
-    for (const s of all) s.cp.sort((a, b) => a.Tmin - b.Tmin);
-    return all.sort((a, b) => (a.name < b.name ? -1 : a.name > b.name ? 1 : a.phase < b.phase ? -1 : a.phase > b.phase ? 1 : 0));
+    const v = this.view();
+    return Array.from({ length: v.length }, (_, i) => v.at(i));
   }
 }
