@@ -68,6 +68,5 @@ export class Interned<T> {
   }
 }
 
-/** undefined ⇄ NaN, for optional numbers kept in an F64Column. */
+/** An optional number as an F64Column keeps it: undefined becomes NaN. */
 export const toCell = (v: number | undefined): number => (v === undefined ? NaN : v);
-export const fromCell = (v: number): number | undefined => (Number.isNaN(v) ? undefined : v);

@@ -9,7 +9,7 @@ import { rule as badCpSpec } from './rules/bad-cp-spec.js';
 import { formatFormula } from './chemistry/formula.js';
 import { toDeclared } from './units/convert.js';
 import { arrayList, type SpeciesList } from './species-list.js';
-import { F64Column, fromCell, I32Column, Interned, toCell } from './columns.js';
+import { F64Column, I32Column, Interned, toCell } from './columns.js';
 import { CP_MODELS, PHASES, type CpModelName, type CpSpec, type Finding, type Formula, type Phase, type RowValues, type Species, type SpeciesRow } from './types.js';
 
 const FIELDS = ['dHf', 'dGf', 'S'] as const;
@@ -64,14 +64,13 @@ class ValueRows {
 /** Cp ranges as rows declared them: coefficients, exponents and listed temperatures in one number pool. */
 class CpRows {
   readonly model = new I32Column();
-  readonly unit = new I32Column();
-  readonly unitFactor = new F64Column();
+  readonly unit = new I32Column(); // the declared unit and its factor, interned together
   readonly Tmin = new F64Column();
   readonly Tmax = new F64Column();
   readonly start = new I32Column(); // coefficients at pool[start, start + count)
   readonly count = new I32Column();
-  readonly exponents = new I32Column(); // start in the pool, or −1
-  readonly temps = new I32Column(); // start in the pool, or −1
+  /** poly: the exponents, table: the listed temperatures, at pool[extra, extra + count); else −1. Shared by equal lists. */
+  readonly extra = new I32Column();
   readonly file = new I32Column();
   readonly line = new I32Column();
   readonly next = new I32Column();
@@ -89,8 +88,6 @@ class SpeciesRows {
   readonly file = new I32Column(); // the first row's location
   readonly line = new I32Column();
   readonly P_ref = new F64Column();
-  /** the values the record takes (the first row giving each), then their uncertainties */
-  readonly num = VALUE_COLUMNS.map(() => new F64Column());
   readonly values = { head: new I32Column(), tail: new I32Column(), count: new I32Column() };
   readonly cp = { head: new I32Column(), tail: new I32Column(), count: new I32Column() };
   /** the next species with the same name (another phase), or −1 */
@@ -103,9 +100,14 @@ export class SpeciesStore {
   private readonly cps = new CpRows();
   private readonly byName = new Map<string, number>(); // name -> a species of that name (others chained)
   private readonly files = new Interned<string>();
-  private readonly texts = new Interned<string>(); // sources, Cp units, state words
+  private readonly texts = new Interned<string>(); // sources, state words
+  private readonly cpUnits = new Interned<string>(); // `${unit}\0${factor}` -> id
+  private readonly cpUnitOf: { unit: string; factor: number }[] = []; // id -> the unit and its factor
+  private readonly lists = new Map<string, number>(); // exponent or temperature list -> its start in the Cp pool
   private readonly tables = new Interned<Record<string, number>>(); // a table's columns object
   private readonly tableUnits: Record<string, string>[] = [];
+  /** uncertainties stated on a species' first row when that row gave no values (rare: a Cp-only row) */
+  private readonly firstRowU = new Map<number, RowValues>();
 
   get size(): number {
     return this.sp.name.length;
@@ -121,7 +123,7 @@ export class SpeciesStore {
     }
     const ids = { species: row.species, phase: row.phase };
     const findings: Finding[] = [];
-    if (formatFormula(row.formula) !== formatFormula(this.sp.formula[s]!)) {
+    if (row.formula !== this.sp.formula[s] && formatFormula(row.formula) !== formatFormula(this.sp.formula[s]!)) {
       findings.push(makeFinding(conflictingValues, 'formula', { formula: row.formulaText, first: this.sp.formulaText[s]!, firstLine: this.sp.line.get(s) }, { ...v.location, column: row.columns.formula ?? row.columns.species, field: 'formula' }, ids));
     }
     // exact repeat of an earlier row: same values from the same source, same Cp range (or none)
@@ -152,7 +154,6 @@ export class SpeciesStore {
       }
     }
     this.addValues(s, v);
-    this.takeValues(s, v);
     return findings;
   }
 
@@ -178,7 +179,6 @@ export class SpeciesStore {
     sp.file.push(this.files.id(v.location.file));
     sp.line.push(v.location.line);
     sp.P_ref.push(v.P_ref);
-    for (const c of sp.num) c.push(NaN);
     for (const list of [sp.values, sp.cp]) {
       list.head.push(-1);
       list.tail.push(-1);
@@ -187,8 +187,8 @@ export class SpeciesStore {
     sp.sameName.push(this.byName.get(row.species) ?? -1);
     this.byName.set(row.species, s);
     if (hasValues(v)) this.addValues(s, v);
+    else if (v.u_dHf !== undefined || v.u_dGf !== undefined || v.u_S !== undefined) this.firstRowU.set(s, v); // a Cp row that states uncertainties
     if (row.cp) this.addCp(s, row.cp);
-    this.takeValues(s, v);
   }
 
   // --- value rows and Cp ranges, chained per species in input order
@@ -196,7 +196,7 @@ export class SpeciesStore {
   private addValues(s: number, v: RowValues): void {
     const r = this.vals;
     const i = r.P_ref.push(v.P_ref);
-    VALUE_COLUMNS.forEach((f, k) => r.num[k]!.push(toCell(v[f])));
+    for (let k = 0; k < VALUE_COLUMNS.length; k++) r.num[k]!.push(toCell(v[VALUE_COLUMNS[k]!]));
     r.source.push(this.texts.id(v.source));
     r.file.push(this.files.id(v.location.file));
     r.line.push(v.location.line);
@@ -208,19 +208,30 @@ export class SpeciesStore {
   private addCp(s: number, c: CpSpec): void {
     const r = this.cps;
     const i = r.model.push(CP_MODELS.indexOf(c.model));
-    r.unit.push(this.texts.id(c.unit));
-    r.unitFactor.push(c.unitFactor);
+    const unit = this.cpUnits.id(`${c.unit}\u0000${c.unitFactor}`);
+    if (unit === this.cpUnitOf.length) this.cpUnitOf.push({ unit: c.unit, factor: c.unitFactor });
+    r.unit.push(unit);
     r.Tmin.push(c.Tmin);
     r.Tmax.push(c.Tmax);
     r.start.push(this.pool(c.coeffs));
     r.count.push(c.coeffs.length);
-    r.exponents.push(c.exponents ? this.pool(c.exponents) : -1);
-    r.temps.push(c.temps ? this.pool(c.temps) : -1);
+    const extra = c.exponents ?? c.temps;
+    r.extra.push(extra ? this.sharedList(extra) : -1);
     r.file.push(this.files.id(c.location.file));
     r.line.push(c.location.line);
     r.next.push(-1);
     const count = this.link(this.sp.cp, r.next, s, i);
     if (count > SpeciesStore.SCAN) this.cpMap(s).push(i);
+  }
+
+  /** Exponent and temperature lists repeat across a table (`0 1 2 3 -2`, the same grid of T): each distinct list is pooled once. */
+  private sharedList(xs: readonly number[]): number {
+    const key = xs.join(' ');
+    let start = this.lists.get(key);
+    if (start !== undefined) return start;
+    start = this.pool(xs);
+    if (this.lists.size < 10_000) this.lists.set(key, start); // past that, lists are not repeating: keys would cost more than they save
+    return start;
   }
 
   private pool(xs: readonly number[]): number {
@@ -249,10 +260,10 @@ export class SpeciesStore {
   private valueRow(i: number): RowValues {
     const r = this.vals;
     const v: RowValues = { P_ref: r.P_ref.get(i), source: this.texts.get(r.source.get(i)), location: { file: this.files.get(r.file.get(i)), line: r.line.get(i) } };
-    VALUE_COLUMNS.forEach((f, k) => {
-      const x = fromCell(r.num[k]!.get(i));
-      if (x !== undefined) v[f] = x;
-    });
+    for (let k = 0; k < VALUE_COLUMNS.length; k++) {
+      const x = r.num[k]!.get(i);
+      if (!Number.isNaN(x)) v[VALUE_COLUMNS[k]!] = x;
+    }
     return v;
   }
 
@@ -264,17 +275,19 @@ export class SpeciesStore {
       for (let k = 0; k < n; k++) out[k] = r.pool.get(start + k);
       return out;
     };
+    const { unit, factor } = this.cpUnitOf[r.unit.get(i)]!;
+    const model = CP_MODELS[r.model.get(i)] as CpModelName;
     const c: CpSpec = {
-      model: CP_MODELS[r.model.get(i)] as CpModelName,
+      model,
       coeffs: numbers(r.start.get(i)),
-      unit: this.texts.get(r.unit.get(i)),
-      unitFactor: r.unitFactor.get(i),
+      unit,
+      unitFactor: factor,
       Tmin: r.Tmin.get(i),
       Tmax: r.Tmax.get(i),
       location: { file: this.files.get(r.file.get(i)), line: r.line.get(i) },
     };
-    if (r.exponents.get(i) >= 0) c.exponents = numbers(r.exponents.get(i));
-    if (r.temps.get(i) >= 0) c.temps = numbers(r.temps.get(i));
+    const extra = r.extra.get(i);
+    if (extra >= 0) c[model === 'poly' ? 'exponents' : 'temps'] = numbers(extra);
     return c;
   }
 
@@ -324,12 +337,42 @@ export class SpeciesStore {
     return { push: (i) => push(map!, rangeKey(this.cpRow(i)), i) };
   }
 
-  /** The record takes each value (and each uncertainty) from the first row giving it. */
-  private takeValues(s: number, v: RowValues): void {
-    VALUE_COLUMNS.forEach((f, k) => {
-      const col = this.sp.num[k]!;
-      if (Number.isNaN(col.get(s)) && v[f] !== undefined) col.set(s, v[f]);
-    });
+  /**
+   * The record's values: each field from the first row giving it (the value rows, in input order),
+   * each uncertainty too, except that a first row without values (a Cp row) may already have given one.
+   */
+  private taken(s: number, values: readonly RowValues[]): Pick<Species, 'dHf' | 'dGf' | 'S'> & { u: Species['u'] } {
+    const first = this.firstRowU.get(s);
+    const pick = (f: (typeof VALUE_COLUMNS)[number]): number | undefined => {
+      if (first?.[f] !== undefined) return first[f];
+      for (const v of values) if (v[f] !== undefined) return v[f];
+      return undefined;
+    };
+    const out: Pick<Species, 'dHf' | 'dGf' | 'S'> & { u: Species['u'] } = { u: {} };
+    const dHf = pick('dHf');
+    const dGf = pick('dGf');
+    const S = pick('S');
+    if (dHf !== undefined) out.dHf = dHf;
+    if (dGf !== undefined) out.dGf = dGf;
+    if (S !== undefined) out.S = S;
+    const uH = pick('u_dHf');
+    const uG = pick('u_dGf');
+    const uS = pick('u_S');
+    if (uH !== undefined) out.u.dHf = uH;
+    if (uG !== undefined) out.u.dGf = uG;
+    if (uS !== undefined) out.u.S = uS;
+    return out;
+  }
+
+  /** S° the record takes: the first value row giving one. */
+  private entropy(s: number): number | undefined {
+    const r = this.vals;
+    const k = VALUE_COLUMNS.indexOf('S');
+    for (let i = this.sp.values.head.get(s); i >= 0; i = r.next.get(i)) {
+      const x = r.num[k]!.get(i);
+      if (!Number.isNaN(x)) return x;
+    }
+    return undefined;
   }
 
   /** Species s (in order of first appearance) as the rules read it, built afresh; Cp ranges sorted by Tmin. */
@@ -346,21 +389,22 @@ export class SpeciesStore {
       phase,
       u: {},
       P_ref: sp.P_ref.get(s),
-      values: this.chain(sp.values.head.get(s), this.vals.next).map((i) => this.valueRow(i)),
-      cp: this.chain(sp.cp.head.get(s), this.cps.next).map((i) => this.cpRow(i)).sort((a, b) => a.Tmin - b.Tmin),
+      values: [],
+      cp: [],
       location: { file: this.files.get(sp.file.get(s)), line: sp.line.get(s) },
       columns: this.tables.get(t),
       units: this.tableUnits[t]!,
     };
+    for (let i = sp.values.head.get(s); i >= 0; i = this.vals.next.get(i)) out.values.push(this.valueRow(i));
+    for (let i = sp.cp.head.get(s); i >= 0; i = this.cps.next.get(i)) out.cp.push(this.cpRow(i));
+    if (out.cp.length > 1) out.cp.sort((a, b) => a.Tmin - b.Tmin);
     const state = sp.state.get(s);
     if (state >= 0) out.state = this.texts.get(state);
-    const [dHf, dGf, S, uH, uG, uS] = sp.num.map((c) => fromCell(c.get(s)));
-    if (dHf !== undefined) out.dHf = dHf;
-    if (dGf !== undefined) out.dGf = dGf;
-    if (S !== undefined) out.S = S;
-    if (uH !== undefined) out.u.dHf = uH;
-    if (uG !== undefined) out.u.dGf = uG;
-    if (uS !== undefined) out.u.S = uS;
+    const taken = this.taken(s, out.values);
+    if (taken.dHf !== undefined) out.dHf = taken.dHf;
+    if (taken.dGf !== undefined) out.dGf = taken.dGf;
+    if (taken.S !== undefined) out.S = taken.S;
+    out.u = taken.u;
     return out;
   }
 
@@ -379,14 +423,13 @@ export class SpeciesStore {
       return pa < pb ? -1 : pa > pb ? 1 : 0;
     });
     const ix = Int32Array.from(order);
-    const S = sp.num[VALUE_COLUMNS.indexOf('S')]!;
     return {
       length: n,
       at: (i) => this.at(ix[i]!),
       name: (i) => sp.name[ix[i]!]!,
       phase: (i) => PHASES[sp.phase.get(ix[i]!)]!,
       formula: (i) => sp.formula[ix[i]!]!,
-      S: (i) => fromCell(S.get(ix[i]!)),
+      S: (i) => this.entropy(ix[i]!),
       cpCount: (i) => sp.cp.count.get(ix[i]!),
     };
   }

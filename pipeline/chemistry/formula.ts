@@ -727,7 +727,17 @@ export function hillOrder(elements: Record<string, number>): string[] {
  * followed by another symbol ((C2.5)H6) so that the '.' cannot read as a hydrate separator.
  * The text parses back to `f`.
  */
+/** Written-out forms of the frozen formulas parseFormula hands out (a table repeats a few thousand formulas on 10^6 rows). */
+const formatted = new WeakMap<Formula, string>();
+
 export function formatFormula(f: Formula): string {
+  if (!Object.isFrozen(f) || !Object.isFrozen(f.elements)) return formatUncached(f); // a formula built by hand may still change
+  let text = formatted.get(f);
+  if (text === undefined) formatted.set(f, (text = formatUncached(f)));
+  return text;
+}
+
+function formatUncached(f: Formula): string {
   if (Object.keys(f.elements).length === 0) return f.charge === -1 ? 'e-' : '';
   let out = '';
   const order = hillOrder(f.elements);

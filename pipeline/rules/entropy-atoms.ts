@@ -61,8 +61,10 @@ export function entropyAtomFindings(input: readonly Species[] | SpeciesList): Fi
   const list = asSpeciesList(input);
   const findings: Finding[] = [];
   for (const phase of SCREENED) {
-    // indices, S° and atom counts only: a table of 10^6 rows has ~10^5 species per phase
-    const usable: { i: number; S: number; N: number }[] = [];
+    // indices, S° and atom counts only, in flat arrays: a table of 10^6 rows has ~10^5 species per phase
+    const idx: number[] = [];
+    const Ss: number[] = [];
+    const Ns: number[] = [];
     for (let i = 0; i < list.length; i++) {
       if (list.phase(i) !== phase) continue;
       const S = list.S(i);
@@ -70,7 +72,9 @@ export function entropyAtomFindings(input: readonly Species[] | SpeciesList): Fi
       const N = atomCount(list.formula(i));
       if (N <= 0) continue;
       if (S > 0) {
-        usable.push({ i, S, N });
+        idx.push(i);
+        Ss.push(S);
+        Ns.push(N);
         continue;
       }
       const sp = list.at(i);
@@ -79,31 +83,31 @@ export function entropyAtomFindings(input: readonly Species[] | SpeciesList): Fi
     }
     // one point per atom count (the median of ln S°), so a crowd of similar species does not outvote the rest
     const byN = new Map<number, number[]>();
-    for (const u of usable) {
-      const ys = byN.get(u.N);
-      if (ys) ys.push(Math.log(u.S));
-      else byN.set(u.N, [Math.log(u.S)]);
+    for (let k = 0; k < idx.length; k++) {
+      const ys = byN.get(Ns[k]!);
+      if (ys) ys.push(Math.log(Ss[k]!));
+      else byN.set(Ns[k]!, [Math.log(Ss[k]!)]);
     }
-    if (usable.length < MIN_SPECIES || byN.size < MIN_ATOM_COUNTS) continue;
+    if (idx.length < MIN_SPECIES || byN.size < MIN_ATOM_COUNTS) continue;
     const line = theilSen([...byN].map(([N, ys]) => ({ x: Math.log(N), y: median(ys) })));
     const predict = (N: number): number => line.intercept + line.slope * Math.log(N);
-    const resid = usable.map((u) => Math.log(u.S) - predict(u.N));
+    const resid = Ss.map((S, k) => Math.log(S) - predict(Ns[k]!));
     const scale = robustScale(resid, LOG_SCALE_FLOOR);
-    usable.forEach((u, k) => {
-      if (Math.abs(resid[k]!) <= ATOMS_Z * scale) return;
-      const sp = list.at(u.i);
+    for (let k = 0; k < idx.length; k++) {
+      if (Math.abs(resid[k]!) <= ATOMS_Z * scale) continue;
+      const sp = list.at(idx[k]!);
       const unit = sp.units.S ?? 'J/(mol K)';
       const params = {
-        value: round(toDeclared(u.S, 'S', unit)),
+        value: round(toDeclared(Ss[k]!, 'S', unit)),
         unit,
         phase,
-        atoms: u.N,
-        expected: round(toDeclared(Math.exp(predict(u.N)), 'S', unit)),
+        atoms: Ns[k]!,
+        expected: round(toDeclared(Math.exp(predict(Ns[k]!)), 'S', unit)),
         factor: round(Math.exp(Math.abs(resid[k]!))),
-        count: usable.length,
+        count: idx.length,
       };
       findings.push(makeFinding(rule, 'off', params, where(sp), { species: sp.name, phase }));
-    });
+    }
   }
   return findings;
 }

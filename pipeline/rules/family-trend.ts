@@ -91,7 +91,7 @@ function generalFormula(h: number, rest: string): string {
  */
 export function findSeries(input: readonly Species[] | SpeciesList): Series[] {
   const list = asSpeciesList(input);
-  const groups = new Map<string, { phase: Phase; label: string; byN: Map<number, { index: number; name: string }[]> }>();
+  const groups = new Map<string, { phase: Phase; label: string; byN: Map<number, number[]> }>(); // species indices per carbon count
   for (let i = 0; i < list.length; i++) {
     const formula = list.formula(i);
     const C = formula.elements.C;
@@ -105,16 +105,16 @@ export function findSeries(input: readonly Species[] | SpeciesList): Series[] {
     const key = `${phase}|${h}|${rest}`;
     let g = groups.get(key);
     if (!g) groups.set(key, (g = { phase, label: generalFormula(h, rest), byN: new Map() }));
-    const cand = { index: i, name: list.name(i) };
     const at = g.byN.get(C);
-    if (at) at.push(cand);
-    else g.byN.set(C, [cand]);
+    if (at) at.push(i);
+    else g.byN.set(C, [i]);
   }
   const out: Series[] = [];
   for (const g of groups.values()) {
     const members: SeriesMember[] = [];
-    for (const [n, cands] of g.byN) {
-      const sp = pickIsomer(cands);
+    if (g.byN.size < MIN_FITTED + 1) continue;
+    for (const [n, indices] of g.byN) {
+      const sp = pickIsomer(indices.map((index) => ({ index, name: list.name(index) })));
       if (sp) members.push({ n, index: sp.index, name: sp.name });
     }
     if (members.length < MIN_FITTED + 1) continue;
