@@ -9,7 +9,7 @@ import { rule as badCpSpec } from './rules/bad-cp-spec.js';
 import { formatFormula } from './chemistry/formula.js';
 import { toDeclared } from './units/convert.js';
 import { arrayList, type SpeciesList } from './species-list.js';
-import { F64Column, I32Column, Interned, toCell } from './columns.js';
+import { F64Column, I32Column, Interned, toCell } from './typed-columns.js';
 import { CP_MODELS, PHASES, type CpModelName, type CpSpec, type Finding, type Formula, type Phase, type RowValues, type Species, type SpeciesRow } from './types.js';
 
 const FIELDS = ['dHf', 'dGf', 'S'] as const;

@@ -13,6 +13,12 @@ export interface LoadedSpecies {
 }
 
 export async function loadSpecies(options: OptionsNormalized): Promise<LoadedSpecies> {
+  const { store, ...rest } = await loadStore(options);
+  return { species: store.list(), ...rest };
+}
+
+/** The same, with the species left in their store (columns; each Species built on request), as check() reads them. */
+export async function loadStore(options: OptionsNormalized): Promise<Omit<LoadedSpecies, 'species'> & { store: SpeciesStore }> {
   const store = new SpeciesStore();
   const findings: Finding[] = [];
   let rows = 0;
@@ -28,5 +34,5 @@ export async function loadSpecies(options: OptionsNormalized): Promise<LoadedSpe
     rows += counts.rows;
     rejected += counts.rejected;
   }
-  return { species: store.list(), findings, rows, rejected };
+  return { store, findings, rows, rejected };
 }
