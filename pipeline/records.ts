@@ -1,6 +1,7 @@
 // Fold accepted rows into one record per species and phase; rows are not kept. The records live in
-// columns (columns.ts): a number per field per species, value row and Cp range, strings interned, so
-// 10^6 rows fold into ~100 MB instead of a JavaScript object graph of ~1 GB. `at` builds the Species
+// typed columns (typed-columns.ts): a number per field per species, value row and Cp range; names in a
+// code-unit pool with its own hash index (name-table.ts); other strings interned. 10^6 rows fold into
+// ~200 MB of typed arrays instead of a JavaScript object graph of ~1 GB. `at` builds the Species
 // object the rules read, one at a time; nothing keeps it.
 import { makeFinding } from './rules/finding.js';
 import { rule as conflictingValues } from './rules/conflicting-values.js';
@@ -9,6 +10,7 @@ import { rule as badCpSpec } from './rules/bad-cp-spec.js';
 import { formatFormula } from './chemistry/formula.js';
 import { toDeclared } from './units/convert.js';
 import { arrayList, type SpeciesList } from './species-list.js';
+import { NameTable } from './name-table.js';
 import { F64Column, I32Column, Interned, toCell } from './typed-columns.js';
 import { CP_MODELS, PHASES, type CpModelName, type CpSpec, type Finding, type Formula, type Phase, type RowValues, type Species, type SpeciesRow } from './types.js';
 
@@ -79,9 +81,9 @@ class CpRows {
 
 /** One entry per species and phase, in order of first appearance. */
 class SpeciesRows {
-  readonly name: string[] = [];
-  readonly formulaText: string[] = [];
-  readonly formula: Formula[] = [];
+  readonly name = new I32Column(); // id in the name table
+  readonly formulaText = new I32Column(); // interned text, or −1 when the row wrote the name itself as the formula
+  readonly formula = new I32Column(); // id among the distinct Formula objects
   readonly phase = new I32Column();
   readonly state = new I32Column(); // interned text, or −1
   readonly table = new I32Column(); // the first row's columns and units
@@ -98,7 +100,9 @@ export class SpeciesStore {
   private readonly sp = new SpeciesRows();
   private readonly vals = new ValueRows();
   private readonly cps = new CpRows();
-  private readonly byName = new Map<string, number>(); // name -> a species of that name (others chained)
+  private readonly names = new NameTable();
+  private readonly nameHead = new I32Column(); // name id -> a species of that name (others chained by sameName)
+  private readonly formulas = new Interned<Formula>();
   private readonly files = new Interned<string>();
   private readonly texts = new Interned<string>(); // sources, state words
   private readonly cpUnits = new Interned<string>(); // `${unit}\0${factor}` -> id
@@ -110,7 +114,7 @@ export class SpeciesStore {
   private readonly firstRowU = new Map<number, RowValues>();
 
   get size(): number {
-    return this.sp.name.length;
+    return this.sp.phase.length;
   }
 
   /** Adds an accepted row; returns findings about how it relates to earlier rows of the same species. */
@@ -123,8 +127,9 @@ export class SpeciesStore {
     }
     const ids = { species: row.species, phase: row.phase };
     const findings: Finding[] = [];
-    if (row.formula !== this.sp.formula[s] && formatFormula(row.formula) !== formatFormula(this.sp.formula[s]!)) {
-      findings.push(makeFinding(conflictingValues, 'formula', { formula: row.formulaText, first: this.sp.formulaText[s]!, firstLine: this.sp.line.get(s) }, { ...v.location, column: row.columns.formula ?? row.columns.species, field: 'formula' }, ids));
+    const formula = this.formulas.get(this.sp.formula.get(s));
+    if (row.formula !== formula && formatFormula(row.formula) !== formatFormula(formula)) {
+      findings.push(makeFinding(conflictingValues, 'formula', { formula: row.formulaText, first: this.formulaTextOf(s, row.species), firstLine: this.sp.line.get(s) }, { ...v.location, column: row.columns.formula ?? row.columns.species, field: 'formula' }, ids));
     }
     // exact repeat of an earlier row: same values from the same source, same Cp range (or none)
     const sameSourceRows = this.rowsOfSource(s, v);
@@ -159,18 +164,21 @@ export class SpeciesStore {
 
   private find(name: string, phase: Phase): number {
     const p = PHASES.indexOf(phase);
-    let s = this.byName.get(name) ?? -1;
+    const id = this.names.find(name);
+    let s = id < 0 ? -1 : this.nameHead.get(id);
     while (s >= 0 && this.sp.phase.get(s) !== p) s = this.sp.sameName.get(s);
     return s;
   }
 
   private create(row: SpeciesRow): void {
     const sp = this.sp;
-    const s = sp.name.length;
+    const s = sp.phase.length;
     const v = row.values;
-    sp.name.push(row.species);
-    sp.formulaText.push(row.formulaText);
-    sp.formula.push(row.formula);
+    const name = this.names.id(row.species);
+    if (name === this.nameHead.length) this.nameHead.push(-1);
+    sp.name.push(name);
+    sp.formulaText.push(row.formulaText === row.species ? -1 : this.texts.id(row.formulaText));
+    sp.formula.push(this.formulas.id(row.formula));
     sp.phase.push(PHASES.indexOf(row.phase));
     sp.state.push(row.state ? this.texts.id(row.state) : -1);
     const t = this.tables.id(row.columns);
@@ -184,8 +192,8 @@ export class SpeciesStore {
       list.tail.push(-1);
       list.count.push(0);
     }
-    sp.sameName.push(this.byName.get(row.species) ?? -1);
-    this.byName.set(row.species, s);
+    sp.sameName.push(this.nameHead.get(name));
+    this.nameHead.set(name, s);
     if (hasValues(v)) this.addValues(s, v);
     else if (v.u_dHf !== undefined || v.u_dGf !== undefined || v.u_S !== undefined) this.firstRowU.set(s, v); // a Cp row that states uncertainties
     if (row.cp) this.addCp(s, row.cp);
@@ -375,17 +383,22 @@ export class SpeciesStore {
     return undefined;
   }
 
+  private formulaTextOf(s: number, name: string): string {
+    const t = this.sp.formulaText.get(s);
+    return t < 0 ? name : this.texts.get(t);
+  }
+
   /** Species s (in order of first appearance) as the rules read it, built afresh; Cp ranges sorted by Tmin. */
   at(s: number): Species {
     const sp = this.sp;
-    const name = sp.name[s]!;
+    const name = this.names.name(sp.name.get(s));
     const phase = PHASES[sp.phase.get(s)]!;
     const t = sp.table.get(s);
     const out: Species = {
       key: `${name}|${phase}`,
       name,
-      formulaText: sp.formulaText[s]!,
-      formula: sp.formula[s]!,
+      formulaText: this.formulaTextOf(s, name),
+      formula: this.formulas.get(sp.formula.get(s)),
       phase,
       u: {},
       P_ref: sp.P_ref.get(s),
@@ -415,9 +428,8 @@ export class SpeciesStore {
     const order = Array.from({ length: n }, (_, i) => i);
     const phaseOf = (i: number): string => PHASES[sp.phase.get(i)]!;
     order.sort((a, b) => {
-      const na = sp.name[a]!;
-      const nb = sp.name[b]!;
-      if (na !== nb) return na < nb ? -1 : 1;
+      const byName = this.names.compare(sp.name.get(a), sp.name.get(b));
+      if (byName !== 0) return byName;
       const pa = phaseOf(a);
       const pb = phaseOf(b);
       return pa < pb ? -1 : pa > pb ? 1 : 0;
@@ -426,9 +438,9 @@ export class SpeciesStore {
     return {
       length: n,
       at: (i) => this.at(ix[i]!),
-      name: (i) => sp.name[ix[i]!]!,
+      name: (i) => this.names.name(sp.name.get(ix[i]!)),
       phase: (i) => PHASES[sp.phase.get(ix[i]!)]!,
-      formula: (i) => sp.formula[ix[i]!]!,
+      formula: (i) => this.formulas.get(sp.formula.get(ix[i]!)),
       S: (i) => this.entropy(ix[i]!),
       cpCount: (i) => sp.cp.count.get(ix[i]!),
     };
