@@ -18,7 +18,7 @@ export class NameTable {
   private readonly start = new I32Column();
   private readonly length = new I32Column();
   private readonly hash = new I32Column();
-  /** name id + 1 per slot, 0 for an empty slot; kept at most half full */
+  /** name id + 1 per slot, 0 for an empty slot; kept at most 70 % full */
   private slots = new Int32Array(1 << 10);
 
   get size(): number {
@@ -53,7 +53,7 @@ export class NameTable {
     this.length.push(name.length);
     this.hash.push(hashOf(name));
     this.used += name.length;
-    if ((id + 1) * 2 > this.slots.length) this.rehash(this.slots.length * 2);
+    if ((id + 1) * 10 > this.slots.length * 7) this.rehash(this.slots.length * 2);
     else this.place(id);
     return id;
   }

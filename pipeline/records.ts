@@ -52,11 +52,16 @@ function hasValues(v: RowValues): boolean {
 
 /** The optional numbers of a value row, in the order RowValues lists them; P_ref is always given. */
 const VALUE_COLUMNS = ['dHf', 'dGf', 'S', 'u_dHf', 'u_dGf', 'u_S'] as const;
+const VALUES = VALUE_COLUMNS.slice(0, 3);
+const UNCERTAINTIES = VALUE_COLUMNS.slice(3);
 
 /** Formation values as rows gave them: one entry per kept row, chained per species in input order. */
 class ValueRows {
-  readonly num = VALUE_COLUMNS.map(() => new F64Column());
-  readonly P_ref = new F64Column();
+  readonly num = VALUES.map(() => new F64Column());
+  /** the row's entry in `uNum`, or −1: most rows state no uncertainty */
+  readonly u = new I32Column();
+  readonly uNum = UNCERTAINTIES.map(() => new F64Column());
+  readonly P_ref = new I32Column(); // interned: a table uses one or two standard pressures
   readonly source = new I32Column();
   readonly file = new I32Column();
   readonly line = new I32Column();
@@ -89,7 +94,7 @@ class SpeciesRows {
   readonly table = new I32Column(); // the first row's columns and units
   readonly file = new I32Column(); // the first row's location
   readonly line = new I32Column();
-  readonly P_ref = new F64Column();
+  readonly P_ref = new I32Column(); // interned
   readonly values = { head: new I32Column(), tail: new I32Column(), count: new I32Column() };
   readonly cp = { head: new I32Column(), tail: new I32Column(), count: new I32Column() };
   /** the next species with the same name (another phase), or −1 */
@@ -103,6 +108,7 @@ export class SpeciesStore {
   private readonly names = new NameTable();
   private readonly nameHead = new I32Column(); // name id -> a species of that name (others chained by sameName)
   private readonly formulas = new Interned<Formula>();
+  private readonly pressures = new Interned<number>();
   private readonly files = new Interned<string>();
   private readonly texts = new Interned<string>(); // sources, state words
   private readonly cpUnits = new Interned<string>(); // `${unit}\0${factor}` -> id
@@ -186,7 +192,7 @@ export class SpeciesStore {
     sp.table.push(t);
     sp.file.push(this.files.id(v.location.file));
     sp.line.push(v.location.line);
-    sp.P_ref.push(v.P_ref);
+    sp.P_ref.push(this.pressures.id(v.P_ref));
     for (const list of [sp.values, sp.cp]) {
       list.head.push(-1);
       list.tail.push(-1);
@@ -203,8 +209,12 @@ export class SpeciesStore {
 
   private addValues(s: number, v: RowValues): void {
     const r = this.vals;
-    const i = r.P_ref.push(v.P_ref);
-    for (let k = 0; k < VALUE_COLUMNS.length; k++) r.num[k]!.push(toCell(v[VALUE_COLUMNS[k]!]));
+    const i = r.P_ref.push(this.pressures.id(v.P_ref));
+    for (let k = 0; k < VALUES.length; k++) r.num[k]!.push(toCell(v[VALUES[k]!]));
+    if (UNCERTAINTIES.some((f) => v[f] !== undefined)) {
+      r.u.push(r.uNum[0]!.length);
+      for (let k = 0; k < UNCERTAINTIES.length; k++) r.uNum[k]!.push(toCell(v[UNCERTAINTIES[k]!]));
+    } else r.u.push(-1);
     r.source.push(this.texts.id(v.source));
     r.file.push(this.files.id(v.location.file));
     r.line.push(v.location.line);
@@ -267,10 +277,17 @@ export class SpeciesStore {
 
   private valueRow(i: number): RowValues {
     const r = this.vals;
-    const v: RowValues = { P_ref: r.P_ref.get(i), source: this.texts.get(r.source.get(i)), location: { file: this.files.get(r.file.get(i)), line: r.line.get(i) } };
-    for (let k = 0; k < VALUE_COLUMNS.length; k++) {
+    const v: RowValues = { P_ref: this.pressures.get(r.P_ref.get(i)), source: this.texts.get(r.source.get(i)), location: { file: this.files.get(r.file.get(i)), line: r.line.get(i) } };
+    for (let k = 0; k < VALUES.length; k++) {
       const x = r.num[k]!.get(i);
-      if (!Number.isNaN(x)) v[VALUE_COLUMNS[k]!] = x;
+      if (!Number.isNaN(x)) v[VALUES[k]!] = x;
+    }
+    const u = r.u.get(i);
+    if (u >= 0) {
+      for (let k = 0; k < UNCERTAINTIES.length; k++) {
+        const x = r.uNum[k]!.get(u);
+        if (!Number.isNaN(x)) v[UNCERTAINTIES[k]!] = x;
+      }
     }
     return v;
   }
@@ -375,7 +392,7 @@ export class SpeciesStore {
   /** S° the record takes: the first value row giving one. */
   private entropy(s: number): number | undefined {
     const r = this.vals;
-    const k = VALUE_COLUMNS.indexOf('S');
+    const k = VALUES.indexOf('S');
     for (let i = this.sp.values.head.get(s); i >= 0; i = r.next.get(i)) {
       const x = r.num[k]!.get(i);
       if (!Number.isNaN(x)) return x;
@@ -401,7 +418,7 @@ export class SpeciesStore {
       formula: this.formulas.get(sp.formula.get(s)),
       phase,
       u: {},
-      P_ref: sp.P_ref.get(s),
+      P_ref: this.pressures.get(sp.P_ref.get(s)),
       values: [],
       cp: [],
       location: { file: this.files.get(sp.file.get(s)), line: sp.line.get(s) },
