@@ -278,16 +278,21 @@ export class SpeciesStore {
   private valueRow(i: number): RowValues {
     const r = this.vals;
     const v: RowValues = { P_ref: this.pressures.get(r.P_ref.get(i)), source: this.texts.get(r.source.get(i)), location: { file: this.files.get(r.file.get(i)), line: r.line.get(i) } };
-    for (let k = 0; k < VALUES.length; k++) {
-      const x = r.num[k]!.get(i);
-      if (!Number.isNaN(x)) v[VALUES[k]!] = x;
-    }
+    // one property at a time, by name: a computed key in a loop makes every store a slow keyed one
+    const dHf = r.num[0]!.get(i);
+    const dGf = r.num[1]!.get(i);
+    const S = r.num[2]!.get(i);
+    if (!Number.isNaN(dHf)) v.dHf = dHf;
+    if (!Number.isNaN(dGf)) v.dGf = dGf;
+    if (!Number.isNaN(S)) v.S = S;
     const u = r.u.get(i);
     if (u >= 0) {
-      for (let k = 0; k < UNCERTAINTIES.length; k++) {
-        const x = r.uNum[k]!.get(u);
-        if (!Number.isNaN(x)) v[UNCERTAINTIES[k]!] = x;
-      }
+      const uH = r.uNum[0]!.get(u);
+      const uG = r.uNum[1]!.get(u);
+      const uS = r.uNum[2]!.get(u);
+      if (!Number.isNaN(uH)) v.u_dHf = uH;
+      if (!Number.isNaN(uG)) v.u_dGf = uG;
+      if (!Number.isNaN(uS)) v.u_S = uS;
     }
     return v;
   }
