@@ -113,6 +113,7 @@ export class SpeciesStore {
   private readonly texts = new Interned<string>(); // sources, state words
   private readonly cpUnits = new Interned<string>(); // `${unit}\0${factor}` -> id
   private readonly cpUnitOf: { unit: string; factor: number }[] = []; // id -> the unit and its factor
+  private lastCpUnit = -1;
   private readonly lists = new Map<string, number>(); // exponent or temperature list -> its start in the Cp pool
   private readonly tables = new Interned<Record<string, number>>(); // a table's columns object
   private readonly tableUnits: Record<string, string>[] = [];
@@ -226,9 +227,7 @@ export class SpeciesStore {
   private addCp(s: number, c: CpSpec): void {
     const r = this.cps;
     const i = r.model.push(CP_MODELS.indexOf(c.model));
-    const unit = this.cpUnits.id(`${c.unit}\u0000${c.unitFactor}`);
-    if (unit === this.cpUnitOf.length) this.cpUnitOf.push({ unit: c.unit, factor: c.unitFactor });
-    r.unit.push(unit);
+    r.unit.push(this.cpUnitId(c));
     r.Tmin.push(c.Tmin);
     r.Tmax.push(c.Tmax);
     r.start.push(this.pool(c.coeffs));
@@ -240,6 +239,14 @@ export class SpeciesStore {
     r.next.push(-1);
     const count = this.link(this.sp.cp, r.next, s, i);
     if (count > SpeciesStore.SCAN) this.cpMap(s).push(i);
+  }
+
+  private cpUnitId(c: CpSpec): number {
+    const last = this.cpUnitOf[this.lastCpUnit];
+    if (last && last.unit === c.unit && last.factor === c.unitFactor) return this.lastCpUnit;
+    const id = this.cpUnits.id(`${c.unit}\u0000${c.unitFactor}`);
+    if (id === this.cpUnitOf.length) this.cpUnitOf.push({ unit: c.unit, factor: c.unitFactor });
+    return (this.lastCpUnit = id);
   }
 
   /** Exponent and temperature lists repeat across a table (`0 1 2 3 -2`, the same grid of T): each distinct list is pooled once. */

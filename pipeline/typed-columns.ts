@@ -53,13 +53,19 @@ export class Interned<T> {
   private readonly ids = new Map<T, number>();
   readonly values: T[] = [];
 
+  private lastValue: T | undefined;
+  private lastId = -1;
+
   id(v: T): number {
+    if (this.lastId >= 0 && v === this.lastValue) return this.lastId; // rows mostly repeat the previous row's
     let id = this.ids.get(v);
     if (id === undefined) {
       id = this.values.length;
       this.values.push(v);
       this.ids.set(v, id);
     }
+    this.lastValue = v;
+    this.lastId = id;
     return id;
   }
 

@@ -59,7 +59,8 @@ function intern(s: string): string {
 export type RowResult = { row: SpeciesRow; findings?: undefined } | { row?: undefined; findings: Finding[] };
 
 export function parseNumberText(text: string): number | 'nan' | 'inf' | undefined {
-  const t = text.trim().replace(/\u2212/g, '-'); // a typographic minus is a minus
+  let t = text.trim();
+  if (t.indexOf('\u2212') !== -1) t = t.replace(/\u2212/g, '-'); // a typographic minus is a minus
   if (!DECIMAL.test(t)) {
     return /^[+-]?(nan|inf(inity)?)$/i.test(t) ? (/nan/i.test(t) ? 'nan' : 'inf') : undefined;
   }
