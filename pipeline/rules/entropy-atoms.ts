@@ -60,11 +60,13 @@ export function theilSen(points: readonly { x: number; y: number }[]): { slope: 
 export function entropyAtomFindings(input: readonly Species[] | SpeciesList): Finding[] {
   const list = asSpeciesList(input);
   const findings: Finding[] = [];
+  // indices, S° and atom counts only, in typed arrays shared by the phases: a table of 10^6 rows has
+  // ~10^5 species per phase, and number arrays that large would go straight to the old generation
+  const idx = new Int32Array(list.length);
+  const Ss = new Float64Array(list.length);
+  const Ns = new Float64Array(list.length);
   for (const phase of SCREENED) {
-    // indices, S° and atom counts only, in flat arrays: a table of 10^6 rows has ~10^5 species per phase
-    const idx: number[] = [];
-    const Ss: number[] = [];
-    const Ns: number[] = [];
+    let n = 0;
     for (let i = 0; i < list.length; i++) {
       if (list.phase(i) !== phase) continue;
       const S = list.S(i);
@@ -72,9 +74,10 @@ export function entropyAtomFindings(input: readonly Species[] | SpeciesList): Fi
       const N = atomCount(list.formula(i));
       if (N <= 0) continue;
       if (S > 0) {
-        idx.push(i);
-        Ss.push(S);
-        Ns.push(N);
+        idx[n] = i;
+        Ss[n] = S;
+        Ns[n] = N;
+        n++;
         continue;
       }
       const sp = list.at(i);
@@ -83,17 +86,18 @@ export function entropyAtomFindings(input: readonly Species[] | SpeciesList): Fi
     }
     // one point per atom count (the median of ln S°), so a crowd of similar species does not outvote the rest
     const byN = new Map<number, number[]>();
-    for (let k = 0; k < idx.length; k++) {
+    for (let k = 0; k < n; k++) {
       const ys = byN.get(Ns[k]!);
       if (ys) ys.push(Math.log(Ss[k]!));
       else byN.set(Ns[k]!, [Math.log(Ss[k]!)]);
     }
-    if (idx.length < MIN_SPECIES || byN.size < MIN_ATOM_COUNTS) continue;
+    if (n < MIN_SPECIES || byN.size < MIN_ATOM_COUNTS) continue;
     const line = theilSen([...byN].map(([N, ys]) => ({ x: Math.log(N), y: median(ys) })));
     const predict = (N: number): number => line.intercept + line.slope * Math.log(N);
-    const resid = Ss.map((S, k) => Math.log(S) - predict(Ns[k]!));
+    const resid = new Float64Array(n);
+    for (let k = 0; k < n; k++) resid[k] = Math.log(Ss[k]!) - predict(Ns[k]!);
     const scale = robustScale(resid, LOG_SCALE_FLOOR);
-    for (let k = 0; k < idx.length; k++) {
+    for (let k = 0; k < n; k++) {
       if (Math.abs(resid[k]!) <= ATOMS_Z * scale) continue;
       const sp = list.at(idx[k]!);
       const unit = sp.units.S ?? 'J/(mol K)';
@@ -104,7 +108,7 @@ export function entropyAtomFindings(input: readonly Species[] | SpeciesList): Fi
         atoms: Ns[k]!,
         expected: round(toDeclared(Math.exp(predict(Ns[k]!)), 'S', unit)),
         factor: round(Math.exp(Math.abs(resid[k]!))),
-        count: idx.length,
+        count: n,
       };
       findings.push(makeFinding(rule, 'off', params, where(sp), { species: sp.name, phase }));
     }
