@@ -8,7 +8,7 @@ import { EquationError } from '../equilibrium/equation.js';
 import { runEquilibrium } from '../equilibrium/index.js';
 import { loadReactions, reactionFromEquation, type ReactionSpec } from '../equilibrium/reactions.js';
 import { renderLnk, type LnkFormat } from '../equilibrium/render.js';
-import { loadSpecies } from '../equilibrium/species.js';
+import { loadStore } from '../equilibrium/species.js';
 import { normalizeOptions, type Options } from '../options.js';
 import { SPECIES_RULES } from '../rules/index.js';
 import type { Finding, UseWindow } from '../types.js';
@@ -85,9 +85,9 @@ async function runLnk(tables: string[], flags: LnkFlags): Promise<number> {
   }
 
   const reference = loadReference();
-  const loaded = await loadSpecies(options);
+  const loaded = await loadStore(options); // the species stay in their columns; only the reactions' are built
   const window: UseWindow = options.useWindow;
-  const eq = runEquilibrium(specs, loaded.species, reference, window, { cpMissingOnPoints: true });
+  const eq = runEquilibrium(specs, loaded.store.view(), reference, window, { cpMissingOnPoints: true });
   findings.push(...eq.findings);
 
   // the data these reactions use, checked by the species rules (the full check is `thermovet check`)
