@@ -49,7 +49,6 @@ function hasValues(v: RowValues): boolean {
   return v.dHf !== undefined || v.dGf !== undefined || v.S !== undefined;
 }
 
-
 /** The optional numbers of a value row, in the order RowValues lists them; P_ref is always given. */
 const VALUE_COLUMNS = ['dHf', 'dGf', 'S', 'u_dHf', 'u_dGf', 'u_S'] as const;
 const VALUES = VALUE_COLUMNS.slice(0, 3);
@@ -110,7 +109,7 @@ export class SpeciesStore {
   private readonly formulas = new Interned<Formula>();
   private readonly pressures = new Interned<number>();
   private readonly files = new Interned<string>();
-  private readonly texts = new Interned<string>(); // sources, state words
+  private readonly texts = new Interned<string>(); // sources, state words, formula texts
   private readonly cpUnits = new Interned<string>(); // `${unit}\0${factor}` -> id
   private readonly cpUnitOf: { unit: string; factor: number }[] = []; // id -> the unit and its factor
   private lastCpUnit = -1;
