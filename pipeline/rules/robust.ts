@@ -19,11 +19,11 @@ export function robustScale(xs: ArrayLike<number>, floor: number): number {
   return Math.max(MAD_TO_SIGMA * sortedMedian(sorted.sort()), floor);
 }
 
-/** The median of ascending values: the middle one, or the mean of the two middle ones. */
+/** The median of ascending values: the middle one, or halfway between the two middle ones, written as simple-statistics writes it (a + 0.5·(b − a)) so the last bit agrees too. */
 function sortedMedian(sorted: Float64Array): number {
   const n = sorted.length;
   const h = n >> 1;
-  return n % 2 === 1 ? sorted[h]! : (sorted[h - 1]! + sorted[h]!) / 2;
+  return n % 2 === 1 ? sorted[h]! : sorted[h - 1]! + 0.5 * (sorted[h]! - sorted[h - 1]!);
 }
 
 export function medianOf(xs: readonly number[]): number {
