@@ -99,7 +99,10 @@ export async function check(options: OptionsNormalized, run: RunInfo): Promise<R
   const summaries: SummaryList = {
     length: species.length,
     *[Symbol.iterator]() {
-      for (let i = 0; i < species.length; i++) yield speciesSummary(species.at(i), reference, options.useWindow, chartKeys.has(speciesKey(species, i)));
+      for (let i = 0; i < species.length; i++) {
+        const sp = species.at(i);
+        yield speciesSummary(sp, reference, options.useWindow, chartKeys.has(sp.key));
+      }
     },
   };
   return {
