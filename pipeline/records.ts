@@ -220,7 +220,7 @@ export class SpeciesStore {
     r.line.push(v.location.line);
     r.next.push(-1);
     const count = this.link(this.sp.values, r.next, s, i);
-    if (count > SpeciesStore.SCAN) this.valueMap(s).push(i); // the map, once built, is kept up to date
+    if (count > SpeciesStore.SCAN) this.indexEntry(this.valueIndex, s, this.sp.values.head.get(s), r.next, i, (j) => sourceKey(this.valueRow(j)));
   }
 
   private addCp(s: number, c: CpSpec): void {
@@ -237,7 +237,7 @@ export class SpeciesStore {
     r.line.push(c.location.line);
     r.next.push(-1);
     const count = this.link(this.sp.cp, r.next, s, i);
-    if (count > SpeciesStore.SCAN) this.cpMap(s).push(i);
+    if (count > SpeciesStore.SCAN) this.indexEntry(this.cpIndex, s, this.sp.cp.head.get(s), r.next, i, (j) => rangeKey(this.cpRow(j)));
   }
 
   private cpUnitId(c: CpSpec): number {
@@ -273,12 +273,6 @@ export class SpeciesStore {
     const count = list.count.get(s) + 1;
     list.count.set(s, count);
     return count;
-  }
-
-  private chain(head: number, next: I32Column): number[] {
-    const out: number[] = [];
-    for (let i = head; i >= 0; i = next.get(i)) out.push(i);
-    return out;
   }
 
   private valueRow(i: number): RowValues {
@@ -347,44 +341,31 @@ export class SpeciesStore {
 
   private cpOfRange(s: number, c: CpSpec): CpSpec[] {
     if (this.sp.cp.count.get(s) > SpeciesStore.SCAN) return (this.cpIndex.get(s)!.get(rangeKey(c)) ?? []).map((i) => this.cpRow(i));
-    return this.chain(this.sp.cp.head.get(s), this.cps.next).map((i) => this.cpRow(i));
+    const out: CpSpec[] = [];
+    for (let i = this.sp.cp.head.get(s); i >= 0; i = this.cps.next.get(i)) out.push(this.cpRow(i));
+    return out;
   }
 
-  /** A pusher into species s's value index, built from its rows the first time it is needed. */
-  private valueMap(s: number): { push(i: number): void } {
-    let map = this.valueIndex.get(s);
-    if (!map) {
-      const built = new Map<string, number[]>();
-      for (const i of this.chain(this.sp.values.head.get(s), this.vals.next)) push(built, sourceKey(this.valueRow(i)), i);
-      this.valueIndex.set(s, built);
-      return { push: () => undefined }; // just built, the new row included
-    }
-    return { push: (i) => push(map!, sourceKey(this.valueRow(i)), i) };
-  }
-
-  private cpMap(s: number): { push(i: number): void } {
-    let map = this.cpIndex.get(s);
-    if (!map) {
-      const built = new Map<string, number[]>();
-      for (const i of this.chain(this.sp.cp.head.get(s), this.cps.next)) push(built, rangeKey(this.cpRow(i)), i);
-      this.cpIndex.set(s, built);
-      return { push: () => undefined };
-    }
-    return { push: (i) => push(map!, rangeKey(this.cpRow(i)), i) };
+  /** Adds entry i of species s to its index by `keyOf`; the first time, builds the index from the whole chain (i included). */
+  private indexEntry(index: Map<number, Map<string, number[]>>, s: number, head: number, next: I32Column, i: number, keyOf: (j: number) => string): void {
+    const map = index.get(s);
+    if (map) return push(map, keyOf(i), i);
+    const built = new Map<string, number[]>();
+    for (let j = head; j >= 0; j = next.get(j)) push(built, keyOf(j), j);
+    index.set(s, built);
   }
 
   /**
    * The record's values: each field from the first row giving it (the value rows, in input order),
    * each uncertainty too, except that a first row without values (a Cp row) may already have given one.
    */
-  private taken(s: number, values: readonly RowValues[]): Pick<Species, 'dHf' | 'dGf' | 'S'> & { u: Species['u'] } {
+  private takeValues(s: number, out: Species): void {
     const first = this.firstRowU.get(s);
     const pick = (f: (typeof VALUE_COLUMNS)[number]): number | undefined => {
       if (first?.[f] !== undefined) return first[f];
-      for (const v of values) if (v[f] !== undefined) return v[f];
+      for (const v of out.values) if (v[f] !== undefined) return v[f];
       return undefined;
     };
-    const out: Pick<Species, 'dHf' | 'dGf' | 'S'> & { u: Species['u'] } = { u: {} };
     const dHf = pick('dHf');
     const dGf = pick('dGf');
     const S = pick('S');
@@ -397,7 +378,6 @@ export class SpeciesStore {
     if (uH !== undefined) out.u.dHf = uH;
     if (uG !== undefined) out.u.dGf = uG;
     if (uS !== undefined) out.u.S = uS;
-    return out;
   }
 
   /** S° the record takes: the first value row giving one. */
@@ -441,11 +421,7 @@ export class SpeciesStore {
     if (out.cp.length > 1) out.cp.sort((a, b) => a.Tmin - b.Tmin);
     const state = sp.state.get(s);
     if (state >= 0) out.state = this.texts.get(state);
-    const taken = this.taken(s, out.values);
-    if (taken.dHf !== undefined) out.dHf = taken.dHf;
-    if (taken.dGf !== undefined) out.dGf = taken.dGf;
-    if (taken.S !== undefined) out.S = taken.S;
-    out.u = taken.u;
+    this.takeValues(s, out);
     return out;
   }
 

@@ -6,6 +6,9 @@ const CHUNK_BITS = 14;
 const CHUNK = 1 << CHUNK_BITS; // entries per chunk
 const MASK = CHUNK - 1;
 
+// F64Column and I32Column are written out twice on purpose: one generic class would make every get and
+// set see two array kinds (a polymorphic access) on the hottest lines of the store.
+
 /** A column of float64 values; NaN stands for "not given". */
 export class F64Column {
   private readonly chunks: Float64Array[] = [];

@@ -63,7 +63,10 @@ export function entropyAtomFindings(input: readonly Species[] | SpeciesList): Fi
   // indices, S° and atom counts only, in typed arrays shared by the phases: a table of 10^6 rows has
   // ~10^5 species per phase, and number arrays that large would go straight to the old generation
   const perPhase = new Map<Phase, number>();
-  for (let i = 0; i < list.length; i++) perPhase.set(list.phase(i), (perPhase.get(list.phase(i)) ?? 0) + 1);
+  for (let i = 0; i < list.length; i++) {
+    const p = list.phase(i);
+    perPhase.set(p, (perPhase.get(p) ?? 0) + 1);
+  }
   const size = Math.max(0, ...SCREENED.map((p) => perPhase.get(p) ?? 0));
   const idx = new Int32Array(size);
   const Ss = new Float64Array(size);
