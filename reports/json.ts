@@ -1,10 +1,11 @@
-// The JSON report: the Report itself, keys in a fixed order, two-space indent, trailing newline.
+// The JSON report: the Report itself, keys in a fixed order, trailing newline; objects indented by two
+// spaces, the elements of the top-level arrays one per line.
 // Each finding also carries its file and line at the top level (the contract's `findings[] {rule,
 // severity, species, phase, file, line, message, …}`), beside the full `location`.
 //
 // A report of 10^6 rows holds 10^5–10^6 species summaries: as one string it would cost a few hundred
-// MB at once. `jsonChunks` yields the same bytes as `renderJson` piece by piece (a few hundred array elements at a
-// time), and `writeJson` writes them to disk atomically without ever holding the whole text.
+// MB at once. `jsonChunks` yields the text piece by piece (32 array elements at a time), and
+// `writeJson` writes it to disk atomically without ever holding the whole text.
 import { closeSync, openSync, renameSync, rmSync, writeSync } from 'node:fs';
 import { basename, dirname, join } from 'node:path';
 import { InputError } from '../pipeline/errors.js';
@@ -26,18 +27,12 @@ export function findingForJson(f: Finding): Record<string, unknown> {
   };
 }
 
+/** The whole report as one string (small reports: export, tests); the same bytes as `jsonChunks`. */
 export function renderJson(report: Report): string {
-  const out: Record<string, unknown> = { ...report };
-  if (report.findings) out.findings = report.findings.map(findingForJson);
-  if (report.species && !Array.isArray(report.species)) out.species = [...report.species];
-  return JSON.stringify(out, null, 2) + '\n';
+  return [...jsonChunks(report)].join('');
 }
 
-/**
- * Array elements serialised per JSON.stringify call. Small enough that each piece (~25 kB) stays out of
- * V8's large-object space: large strings are freed only by full collections, and a 10^6-row report
- * written in 1 MB pieces grew the heap by ~250 MB of such garbage.
- */
+/** Array elements per yielded piece: each piece (~10 kB) stays out of V8's large-object space, whose strings only full collections free. */
 const BATCH = 32;
 
 /** An array, or a list made as it is read (Report.species from check()): written element by element. */
@@ -50,7 +45,11 @@ function at(value: unknown, indent: string): string {
   return JSON.stringify(value, null, 2).replace(/\n/g, '\n' + indent);
 }
 
-/** The text of renderJson(report), in pieces: top-level arrays element by element. */
+/**
+ * The report's text, in pieces. Top-level objects are indented by two spaces; each element of a
+ * top-level array (findings, species, reactions) is one compact line, so the report greps and diffs
+ * finding by finding, and a 10^6-row report is half the size it would be indented.
+ */
 export function* jsonChunks(report: Report): Generator<string> {
   const keys = Object.keys(report).filter((k) => {
     const v = (report as unknown as Record<string, unknown>)[k];
@@ -69,17 +68,17 @@ export function* jsonChunks(report: Report): Generator<string> {
       yield `  ${JSON.stringify(key)}: []${end}`;
     } else if (isList(value)) {
       yield `  ${JSON.stringify(key)}: [\n`;
-      // a batch inside two arrays comes out at exactly this depth: "[\n  [\n" + elements + "\n  ]\n]"
-      let batch: unknown[] = [];
       let written = 0;
+      let batch: string[] = [];
       for (const item of value) {
-        batch.push(key === 'findings' ? findingForJson(item as Finding) : item);
+        // an element JSON cannot express (undefined, a function) is null, as in JSON.stringify of an array
+        batch.push(JSON.stringify(key === 'findings' ? findingForJson(item as Finding) : item) ?? 'null');
         if (batch.length < BATCH) continue;
         written += batch.length;
-        yield JSON.stringify([batch], null, 2).slice(6, -6) + (written < value.length ? ',\n' : '\n');
+        yield '    ' + batch.join(',\n    ') + (written < value.length ? ',\n' : '\n');
         batch = [];
       }
-      if (batch.length > 0) yield JSON.stringify([batch], null, 2).slice(6, -6) + '\n';
+      if (batch.length > 0) yield '    ' + batch.join(',\n    ') + '\n';
       yield '  ]' + end;
     } else {
       yield `  ${JSON.stringify(key)}: ${at(value, '  ')}${end}`;

@@ -1,4 +1,5 @@
-// The streamed JSON writer must give exactly the bytes of JSON.stringify(report, null, 2) + '\n'.
+// The streamed JSON writer: the report's content exactly as JSON.stringify gives it, each element of a
+// top-level array on its own line, and the same bytes whether written to disk or rendered to a string.
 import { mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
@@ -6,9 +7,37 @@ import { describe, expect, it } from 'vitest';
 import { check } from '../../pipeline/check.js';
 import { normalizeOptions } from '../../pipeline/options.js';
 import type { Report } from '../../pipeline/types.js';
-import { jsonChunks, renderJson, writeJson } from '../../reports/json.js';
+import { findingForJson, jsonChunks, renderJson, writeJson } from '../../reports/json.js';
 
 const dir = mkdtempSync(join(tmpdir(), 'thermovet-json-'));
+
+/** What JSON.stringify makes of the report (findings with file and line lifted, lists as arrays): the content oracle. */
+function plain(report: Report): unknown {
+  const out: Record<string, unknown> = { ...report };
+  if (report.findings) out.findings = report.findings.map(findingForJson);
+  if (report.species) out.species = [...report.species];
+  return JSON.parse(JSON.stringify(out)) as unknown;
+}
+
+/** Checks text against the oracle, and that each top-level array element is exactly one line. */
+function expectReport(text: string, report: Report): void {
+  expect(JSON.parse(text)).toEqual(plain(report));
+  expect(text.endsWith('}\n')).toBe(true);
+  const lines = text.split('\n');
+  for (const key of ['findings', 'species', 'reactions'] as const) {
+    const items = (report as unknown as Record<string, unknown[] | undefined>)[key];
+    if (!items || items.length === 0) continue;
+    const open = lines.indexOf(`  "${key}": [`);
+    expect(open).toBeGreaterThan(0);
+    const body = lines.slice(open + 1, open + 1 + items.length);
+    expect(lines[open + 1 + items.length]).toMatch(/^  \],?$/);
+    const expected = (plain(report) as Record<string, unknown[]>)[key]!;
+    body.forEach((line, i) => {
+      expect(line.startsWith('    ')).toBe(true);
+      expect(JSON.parse(line.replace(/,$/, ''))).toEqual(expected[i]);
+    });
+  }
+}
 
 describe('streamed JSON report', () => {
   it('equals renderJson on the demo dataset', async () => {
@@ -17,9 +46,12 @@ describe('streamed JSON report', () => {
     const out = join(dir, 'demo.json');
     writeJson(out, report);
     expect(readFileSync(out, 'utf8')).toBe(renderJson(report));
+    expectReport(renderJson(report), report);
+    // the objects keep their indentation
+    expect(renderJson(report)).toContain('\n  "summary": {\n    "rows": ');
   });
 
-  it('equals renderJson on awkward content: empty arrays, undefined keys, line feeds and quotes in text', () => {
+  it('gives the content of JSON.stringify on awkward content: empty arrays, undefined keys, line feeds and quotes in text', () => {
     const report = {
       tool: { name: 'thermovet', version: '0' },
       dataset: undefined,
@@ -32,12 +64,13 @@ describe('streamed JSON report', () => {
       reactions: [{ id: 'R1', equation: 'A = B', file: 'r.csv', line: 2, balanced: true, points: [] }],
       provenance: { generatedAt: 't', inputs: [], reference: { path: 'p', sha256: 's' }, options: { nested: [[1, 2], []] }, rules: ['a'] },
     } as unknown as Report;
-    expect([...jsonChunks(report)].join('')).toBe(renderJson(report));
-    expect([...jsonChunks({} as Report)].join('')).toBe(renderJson({} as Report));
+    expectReport(renderJson(report), report);
+    expect(renderJson(report)).toContain('\n    {"rule":"bad-number","severity":"error","file":"f.csv","line":2,"message":"line1\\nline2",');
+    expect(renderJson({} as Report)).toBe('{}\n');
     // arrays longer than one serialisation batch, ending on and off a batch boundary
     for (const n of [511, 512, 513, 1024, 1300]) {
       const many = { ...report, findings: Array.from({ length: n }, (_, i) => ({ ...report.findings[i % 2]!, location: { file: 'f.csv', line: i + 2 } })) } as Report;
-      expect([...jsonChunks(many)].join('')).toBe(renderJson(many));
+      expectReport([...jsonChunks(many)].join(''), many);
     }
   });
 
@@ -47,14 +80,15 @@ describe('streamed JSON report', () => {
     const asArray = { ...report, species: [...report.species!] };
     expect(asArray.species.length).toBe(report.species!.length);
     expect(asArray.species.map((s) => s.name)).toContain('CO2');
-    expect([...jsonChunks(report)].join('')).toBe(renderJson(asArray));
     expect(renderJson(report)).toBe(renderJson(asArray));
+    expectReport(renderJson(report), report);
     // a list longer than one batch, and an empty one
     const summary = asArray.species[0]!;
     for (const n of [0, 512, 700]) {
       const list = { length: n, *[Symbol.iterator]() { for (let i = 0; i < n; i++) yield { ...summary, key: `s${i}` }; } };
       const arr = [...list];
       expect([...jsonChunks({ ...report, species: list })].join('')).toBe(renderJson({ ...report, species: arr }));
+      expectReport(renderJson({ ...report, species: arr }), { ...report, species: arr });
     }
   });
 
