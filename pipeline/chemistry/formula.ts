@@ -756,9 +756,16 @@ function formatUncached(f: Formula): string {
   return out;
 }
 
+/** Atom counts of the frozen formulas parseFormula hands out: four rules ask for each species'. */
+const atoms = new WeakMap<Formula, number>();
+
 /** Atoms per formula unit (fractional for non-stoichiometric formulas such as Fe0.947O). */
 export function atomCount(f: Formula): number {
+  const known = atoms.get(f);
+  if (known !== undefined) return known;
   let n = 0;
   for (const sym in f.elements) n += f.elements[sym];
-  return tidy(n);
+  n = tidy(n);
+  if (Object.isFrozen(f) && Object.isFrozen(f.elements)) atoms.set(f, n); // a formula built by hand may still change
+  return n;
 }

@@ -79,8 +79,23 @@ export function scanOf(spec: CpSpec): CpScan {
   return scan;
 }
 
+/** Grids without extra points by their ends: a table gives most of its ranges the same few bounds. Never modified. */
+const grids = new Map<string, readonly number[]>();
+const GRID_CACHE_LIMIT = 1000;
+
 /** Sample grid over [a, b] (0 < a < b): linear ∪ logarithmic ∪ extra points inside, ascending, unique. */
-export function sampleGrid(a: number, b: number, extra: readonly number[] = []): number[] {
+export function sampleGrid(a: number, b: number, extra: readonly number[] = []): readonly number[] {
+  if (extra.length > 0 || !(a > 0)) return makeGrid(a, b, extra); // (−0 and 0 would share a key)
+  const key = `${a} ${b}`;
+  let grid = grids.get(key);
+  if (grid === undefined) {
+    if (grids.size >= GRID_CACHE_LIMIT) grids.clear();
+    grids.set(key, (grid = makeGrid(a, b, extra)));
+  }
+  return grid;
+}
+
+function makeGrid(a: number, b: number, extra: readonly number[]): number[] {
   const lin = new Array<number>(LINEAR_POINTS + 1);
   for (let i = 0; i <= LINEAR_POINTS; i++) lin[i] = a + ((b - a) * i) / LINEAR_POINTS;
   let log: number[] = [];
