@@ -9,7 +9,9 @@ import { speciesSummary } from './summary.js';
 import { DATASET_RULES, RULES, SPECIES_RULES } from './rules/index.js';
 import { impactOfFindings, loadReactions, runEquilibrium } from './equilibrium/index.js';
 import { speciesKey } from './species-list.js';
+import { FindingStore } from './finding-store.js';
 import { CHART_SPECIES_LIMIT, type CheckContext, type Finding, type OptionsNormalized, type ReactionResult, type Report, type Summary, type SummaryList } from './types.js';
+import type { ResolvedReaction } from './equilibrium/reactions.js';
 
 export interface RunInfo {
   version: string;
@@ -30,7 +32,7 @@ export function compareFindings(a: Finding, b: Finding): number {
   return a.message < b.message ? -1 : a.message > b.message ? 1 : 0;
 }
 
-export function summarize(rows: number, accepted: number, rejected: number, species: number, findings: Finding[]): Summary {
+export function summarize(rows: number, accepted: number, rejected: number, species: number, findings: Iterable<Finding>): Summary {
   let errors = 0;
   let warnings = 0;
   let infos = 0;
@@ -43,13 +45,29 @@ export function summarize(rows: number, accepted: number, rejected: number, spec
   return { rows, accepted, rejected, species, errors, warnings, infos };
 }
 
+/** What each finding on a reaction's species costs in ln K: only those findings are made into objects. */
+function attachImpact(findings: FindingStore, resolved: readonly ResolvedReaction[]): void {
+  const used = new Set<string>();
+  for (const r of resolved) for (const t of r.terms) used.add(t.thermo.species.key);
+  const positions: number[] = [];
+  for (let i = 0; i < findings.length; i++) {
+    const key = findings.speciesKey(i);
+    if (key !== undefined && used.has(key)) positions.push(i);
+  }
+  const picked = positions.map((i) => findings.at(i));
+  impactOfFindings(picked, resolved);
+  picked.forEach((f, k) => {
+    if (f.impact) findings.setImpact(positions[k]!, f.impact);
+  });
+}
+
 export async function check(options: OptionsNormalized, run: RunInfo): Promise<Report> {
   const reference = loadReference();
   const ctx: CheckContext = { options, reference };
   const store = new SpeciesStore();
-  const findings: Finding[] = [];
+  const findings = new FindingStore(); // compact: a table can have a finding on every row
   const onFinding = (f: Finding): void => {
-    findings.push(f);
+    findings.add(f);
   };
   let rows = 0;
   let read = 0; // accepted rows seen so far, for progress only
@@ -59,7 +77,7 @@ export async function check(options: OptionsNormalized, run: RunInfo): Promise<R
     const counts = await ingestTable(
       { path: table.path, format: table.format, headerMap: options.headerMap, units: options.units },
       (row) => {
-        for (const f of store.add(row)) findings.push(f);
+        for (const f of store.add(row)) findings.add(f);
         if (run.onProgress && ++read % 65536 === 0) run.onProgress(read);
       },
       onFinding,
@@ -71,26 +89,30 @@ export async function check(options: OptionsNormalized, run: RunInfo): Promise<R
   const species = store.view(); // species order (name, then phase); each Species is built when asked for
   for (let i = 0; i < species.length; i++) {
     const sp = species.at(i);
-    for (const rule of SPECIES_RULES) for (const f of rule.check!(sp, ctx)) findings.push(f);
+    for (const rule of SPECIES_RULES) for (const f of rule.check!(sp, ctx)) findings.add(f);
   }
-  for (const rule of DATASET_RULES) for (const f of rule.checkAll(species, ctx)) findings.push(f);
+  for (const rule of DATASET_RULES) for (const f of rule.checkAll(species, ctx)) findings.add(f);
   // the equilibrium stage: ln K for the reactions of interest, then what each finding costs in ln K
   let reactions: ReactionResult[] | undefined;
   const charted = new Set<string>(); // species whose Cp curve the report samples for charts
   if (options.reactionsFile) {
     const loaded = loadReactions(options.reactionsFile);
     const eq = runEquilibrium(loaded.reactions, species, reference, options.useWindow, { cpMissingOnPoints: true });
-    for (const f of loaded.findings) findings.push(f);
-    for (const f of eq.findings) findings.push(f);
-    impactOfFindings(findings, eq.resolved);
+    for (const f of loaded.findings) findings.add(f);
+    for (const f of eq.findings) findings.add(f);
+    attachImpact(findings, eq.resolved);
     reactions = eq.results;
     for (const r of eq.resolved) for (const t of r.terms) charted.add(t.thermo.species.key);
   }
-  for (const f of findings) if (f.rule.startsWith('cp-') && f.species !== undefined) charted.add(`${f.species}|${f.phase}`);
+  for (let i = 0; i < findings.length; i++) {
+    if (!findings.rule(i).startsWith('cp-')) continue;
+    const key = findings.speciesKey(i);
+    if (key !== undefined) charted.add(key);
+  }
   for (let i = 0; i < species.length && charted.size < CHART_SPECIES_LIMIT; i++) {
     if (species.cpCount(i) > 0) charted.add(speciesKey(species, i));
   }
-  findings.sort(compareFindings);
+  findings.sort();
   // reaction species first, then those with Cp findings, then the rest with a Cp correlation, in name order
   const chartKeys = new Set([...charted].slice(0, CHART_SPECIES_LIMIT));
   const inputs = await Promise.all([...options.tables.map((t) => t.path), ...(options.reactionsFile ? [options.reactionsFile] : [])].map((p) => fileDigest(p)));

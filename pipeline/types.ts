@@ -37,6 +37,11 @@ export interface Finding {
   waived?: { by: string; reason: string; expires: string };
 }
 
+/** The findings of a report: an array, or a finding store (finding-store.ts) whose findings are made as they are read. */
+export interface FindingList extends Iterable<Finding> {
+  readonly length: number;
+}
+
 export interface Formula {
   elements: Record<string, number>;
   charge: number;
@@ -271,7 +276,7 @@ export interface Report {
   tool: { name: string; version: string };
   dataset?: { name: string; useWindow: UseWindow };
   summary: Summary;
-  findings: Finding[];
+  findings: FindingList;
   species?: SummaryList;
   reactions?: ReactionResult[];
   provenance: {

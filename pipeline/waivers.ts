@@ -4,7 +4,8 @@
 import { readFileSync } from 'node:fs';
 import { dirname, resolve } from 'node:path';
 import { LineCounter, isSeq, parseDocument } from 'yaml';
-import { compareFindings, summarize } from './check.js';
+import { summarize } from './check.js';
+import { FindingStore } from './finding-store.js';
 import { loadStructured } from './ingest/structured.js';
 import { displayPath } from './options.js';
 import { makeFinding } from './rules/finding.js';
@@ -90,26 +91,47 @@ function target(w: Waiver): string {
  * @param today the day of the run, YYYY-MM-DD (the CLI reads the clock, or the fixed date of a deterministic run)
  */
 export function applyWaivers(findings: Finding[], waivers: Waiver[], today: string): Finding[] {
-  const active = waivers.filter((w) => w.expires >= today);
-  const used = new Set<Waiver>();
-  const out: Finding[] = findings.map((f) => {
-    const w = active.find((x) => matches(x, f));
-    if (!w) return f;
-    used.add(w);
-    return { ...f, waived: { by: w.acceptedBy, reason: w.reason, expires: w.expires } };
-  });
-  for (const w of waivers) {
-    const params = { rule: w.rule, target: target(w), expires: w.expires, by: w.acceptedBy };
-    const extra = { ...(w.species !== undefined ? { species: w.species } : {}), ...(w.phase !== undefined ? { phase: w.phase } : {}) };
-    if (w.expires < today) out.push(makeFinding(waiverExpired, 'expired', params, w.location, extra));
-    else if (!used.has(w)) out.push(makeFinding(waiverUnmatched, 'unmatched', params, w.location, extra));
-  }
+  const apply = waiverOf(waivers, today);
+  const out = findings.map(apply.toFinding);
+  for (const f of apply.findingsAboutWaivers()) out.push(f);
   return out;
 }
 
-/** The report with waivers applied: findings re-sorted, summary recounted (waived findings do not count). */
+/** One finding at a time: `toFinding` waives what an unexpired waiver covers; then the findings about the waivers themselves. */
+function waiverOf(waivers: Waiver[], today: string): { toFinding: (f: Finding) => Finding; findingsAboutWaivers: () => Finding[] } {
+  const active = waivers.filter((w) => w.expires >= today);
+  const used = new Set<Waiver>();
+  return {
+    toFinding: (f) => {
+      const w = active.find((x) => matches(x, f));
+      if (!w) return f;
+      used.add(w);
+      return { ...f, waived: { by: w.acceptedBy, reason: w.reason, expires: w.expires } };
+    },
+    findingsAboutWaivers: () => {
+      const out: Finding[] = [];
+      for (const w of waivers) {
+        const params = { rule: w.rule, target: target(w), expires: w.expires, by: w.acceptedBy };
+        const extra = { ...(w.species !== undefined ? { species: w.species } : {}), ...(w.phase !== undefined ? { phase: w.phase } : {}) };
+        if (w.expires < today) out.push(makeFinding(waiverExpired, 'expired', params, w.location, extra));
+        else if (!used.has(w)) out.push(makeFinding(waiverUnmatched, 'unmatched', params, w.location, extra));
+      }
+      return out;
+    },
+  };
+}
+
+/**
+ * The report with waivers applied: findings re-sorted, summary recounted (waived findings do not count).
+ * The findings go into a new finding store one at a time: a report with a finding on every row is
+ * never held as objects.
+ */
 export function waiveReport(report: Report, waivers: Waiver[], today: string): Report {
-  const findings = applyWaivers(report.findings, waivers, today).sort(compareFindings);
+  const apply = waiverOf(waivers, today);
+  const findings = new FindingStore();
+  for (const f of report.findings) findings.add(apply.toFinding(f));
+  for (const f of apply.findingsAboutWaivers()) findings.add(f);
+  findings.sort();
   const s = report.summary;
   return { ...report, summary: summarize(s.rows, s.accepted, s.rejected, s.species, findings), findings };
 }

@@ -117,7 +117,7 @@ export function renderSarif(report: Report, opts: SarifOptions = {}): string {
         columnKind: 'unicodeCodePoints',
         artifacts: report.provenance.inputs.map((i) => ({ location: { uri: pathToUri(i.path) }, length: i.bytes, hashes: { 'sha-256': i.sha256 } })),
         invocations: [{ executionSuccessful: true, endTimeUtc: report.provenance.generatedAt }],
-        results: report.findings.map((f) => result(f, ruleIndex, opts.columns)),
+        results: Array.from(report.findings, (f) => result(f, ruleIndex, opts.columns)),
         properties: {
           summary: report.summary,
           caution: 'Screening, not certification: results must be reviewed by a qualified engineer; local codes and licensed practice govern design.',

@@ -2,7 +2,7 @@
 // Bounded: however many findings there are, it prints at most `limit` of them plus counts per rule.
 import { failingCount } from '../pipeline/verdict.js';
 import { excerpt } from '../pipeline/errors.js';
-import type { FailOn, Finding, Report, Severity } from '../pipeline/types.js';
+import type { FailOn, Finding, FindingList, Report, Severity } from '../pipeline/types.js';
 
 export interface TerminalOptions {
   color: boolean;
@@ -27,9 +27,30 @@ export function impactOf(f: Finding): number {
   return f.impact?.reduce((m, i) => Math.max(m, i.maxAbsDeltaLnK), 0) ?? 0;
 }
 
-/** Worst first: unwaived before waived, then severity, then ln K impact, then file order. */
-export function rankFindings(findings: Finding[]): Finding[] {
-  return [...findings].sort((a, b) => Number(!!a.waived) - Number(!!b.waived) || RANK[a.severity] - RANK[b.severity] || impactOf(b) - impactOf(a));
+const worse = (a: Finding, b: Finding): number => Number(!!a.waived) - Number(!!b.waived) || RANK[a.severity] - RANK[b.severity] || impactOf(b) - impactOf(a);
+
+/**
+ * The `limit` worst findings that pass `keep`, worst first: unwaived before waived, then severity, then
+ * ln K impact, then report order. Selected in one pass holding at most `limit` of them, so a report
+ * with a finding on each of 10^6 rows is never made into objects all at once.
+ */
+export function worstFindings(findings: FindingList, limit: number, keep: (f: Finding) => boolean = () => true): Finding[] {
+  const top: Finding[] = [];
+  if (limit <= 0) return top;
+  for (const f of findings) {
+    if (!keep(f)) continue;
+    if (top.length === limit && worse(f, top[limit - 1]!) >= 0) continue;
+    let lo = 0; // after every finding as bad as f or worse: equals keep report order
+    let hi = top.length;
+    while (lo < hi) {
+      const mid = (lo + hi) >>> 1;
+      if (worse(f, top[mid]!) < 0) hi = mid;
+      else lo = mid + 1;
+    }
+    top.splice(lo, 0, f);
+    if (top.length > limit) top.pop();
+  }
+  return top;
 }
 
 export function renderTerminal(report: Report, opts: TerminalOptions): string {
@@ -46,7 +67,7 @@ export function renderTerminal(report: Report, opts: TerminalOptions): string {
   out.push(`  verdict: ${verdict}`);
   if (report.findings.length === 0) return out.join('\n') + '\n';
 
-  const shown = rankFindings(report.findings).filter((f) => f.severity !== 'info' || report.findings.length <= limit).slice(0, limit);
+  const shown = worstFindings(report.findings, limit, (f) => f.severity !== 'info' || report.findings.length <= limit);
   const groups = new Map<string, Finding[]>();
   for (const f of shown) {
     const key = f.species !== undefined ? `${f.species}${f.phase ? ` (${f.phase})` : ''}` : `${f.location.file} (rows)`;

@@ -90,7 +90,7 @@ const findingId = (f: Finding): string => `${f.rule}|${f.messageId}|${f.location
  * already gave is not added twice.
  */
 export function withDatasetFindings(report: Report, species: readonly Species[], ctx: CheckContext): Report {
-  const have = new Set(report.findings.map(findingId));
+  const have = new Set(Array.from(report.findings, findingId));
   const extra = DATASET_RULES.flatMap((r) => r.checkAll(arrayList(species), ctx)).filter((f) => !have.has(findingId(f)));
   if (extra.length === 0) return report;
   const findings = [...report.findings, ...extra].sort(byLocation);
@@ -125,7 +125,7 @@ export async function diffDatasets(oldV: DiffVersionInput, newV: DiffVersionInpu
   const a = await loadVersion(oldV, opts, run);
   const b = await loadVersion(newV, opts, run);
   const species = compareSpeciesLists(a.species, b.species);
-  const findings = compareFindings(a.report.findings, b.report.findings, tableIndex(a.options), tableIndex(b.options));
+  const findings = compareFindings([...a.report.findings], [...b.report.findings], tableIndex(a.options), tableIndex(b.options));
 
   // reactions: --reactions, else the new manifest's, else the old one's; the use window likewise
   const reactionsFile = b.options.reactionsFile ?? a.options.reactionsFile;

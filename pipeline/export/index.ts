@@ -141,7 +141,7 @@ export async function exportTables(options: OptionsNormalized, opts: ExportOptio
   const { species } = await loadSpecies(options);
   report = withDatasetFindings(report, species, { options, reference: loadReference() });
   if (options.waiversFile) report = waiveReport(report, loadWaivers(options.waiversFile), run.waiverDay);
-  const drop = leftOut(report.findings, species, opts.dropOn);
+  const drop = leftOut([...report.findings], species, opts.dropOn);
 
   const reportPath = opts.reportPath ?? defaultReportPath(opts.out);
   const json = renderJson(report);

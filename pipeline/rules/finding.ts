@@ -24,6 +24,14 @@ export interface FindingExtra {
   severity?: Severity;
 }
 
+/** Each rule's message templates by rule id, as makeFinding meets them: a finding store renders messages again from them. */
+const templates = new Map<string, Record<string, string>>();
+
+/** The template of a rule's message, as makeFinding last used it; undefined when it has not made one. */
+export function templateOf(rule: string, messageId: string): string | undefined {
+  return templates.get(rule)?.[messageId];
+}
+
 export function makeFinding(
   rule: Rule,
   messageId: string,
@@ -33,6 +41,7 @@ export function makeFinding(
 ): Finding {
   const template = rule.messages[messageId];
   if (template === undefined) throw new Error(`internal: rule ${rule.id} has no message ${messageId}`);
+  if (templates.get(rule.id) !== rule.messages) templates.set(rule.id, rule.messages);
   const f: Finding = {
     rule: rule.id,
     severity: extra.severity ?? rule.severity,

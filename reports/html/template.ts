@@ -6,7 +6,7 @@ import { formatNumber } from '../../pipeline/rules/finding.js';
 import { RULES } from '../../pipeline/rules/index.js';
 import { failingCount } from '../../pipeline/verdict.js';
 import { CHART_SPECIES_LIMIT, type FailOn, type Finding, type ReactionResult, type Report, type SpeciesSummary } from '../../pipeline/types.js';
-import { impactOf, rankFindings } from '../terminal.js';
+import { impactOf, worstFindings } from '../terminal.js';
 import { chartKey, cpChartSpec, gibbsChartSpec, LNK_HEIGHT, lnKChartSpec, renderSvg, speciesLabel, windowSpan, type Tolerance } from './charts.js';
 import { esc } from './escape.js';
 import { CSS } from './style.js';
@@ -56,7 +56,8 @@ function verdictBlock(report: Report): string {
 
 function countsBlock(report: Report): string {
   const s = report.summary;
-  const waived = report.findings.filter((f) => f.waived).length;
+  let waived = 0;
+  for (const f of report.findings) if (f.waived) waived++;
   const cell = (label: string, v: number, cls = ''): string => `<div class="${cls}"><dt>${label}</dt><dd>${v}</dd></div>`;
   return (
     '<dl class="counts">' +
@@ -115,11 +116,11 @@ function findingsSection(report: Report, chartAnchor: Map<string, string>): stri
     out.push('<p>No findings.</p></section>');
     return out.join('');
   }
-  const ranked = rankFindings(report.findings);
-  const shown = ranked.slice(0, HTML_FINDINGS_LIMIT);
+  const shown = worstFindings(report.findings, HTML_FINDINGS_LIMIT);
+  const total = report.findings.length;
   out.push(
     `<p class="note">Worst first: unwaived before waived, then by severity and by how far the finding moves ln K. Locations are file:line:field position.${
-      shown.length < ranked.length ? ` The ${shown.length} worst of ${ranked.length} are listed; the JSON and SARIF reports hold all of them.` : ''
+      shown.length < total ? ` The ${shown.length} worst of ${total} are listed; the JSON and SARIF reports hold all of them.` : ''
     }</p>`,
   );
   const groups = new Map<string, { title: string; phase?: string; anchorKey?: string; list: Finding[] }>();
@@ -142,9 +143,9 @@ function findingsSection(report: Report, chartAnchor: Map<string, string>): stri
         '</tbody></table></div>',
     );
   }
-  if (shown.length < ranked.length) {
+  if (shown.length < total) {
     const perRule = new Map<string, number>();
-    for (const f of ranked) perRule.set(`${f.severity}\u0000${f.rule}`, (perRule.get(`${f.severity}\u0000${f.rule}`) ?? 0) + 1);
+    for (const f of report.findings) perRule.set(`${f.severity}\u0000${f.rule}`, (perRule.get(`${f.severity}\u0000${f.rule}`) ?? 0) + 1);
     out.push('<h3>All findings by rule</h3><table><thead><tr><th>severity</th><th>rule</th><th class="num">findings</th></tr></thead><tbody>');
     for (const [k, c] of [...perRule].sort((a, b) => b[1] - a[1])) {
       const [sev, rule] = k.split('\u0000');

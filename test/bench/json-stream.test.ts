@@ -14,7 +14,7 @@ const dir = mkdtempSync(join(tmpdir(), 'thermovet-json-'));
 /** What JSON.stringify makes of the report (findings with file and line lifted, lists as arrays): the content oracle. */
 function plain(report: Report): unknown {
   const out: Record<string, unknown> = { ...report };
-  if (report.findings) out.findings = report.findings.map(findingForJson);
+  if (report.findings) out.findings = Array.from(report.findings, findingForJson);
   if (report.species) out.species = [...report.species];
   return JSON.parse(JSON.stringify(out)) as unknown;
 }
@@ -69,7 +69,7 @@ describe('streamed JSON report', () => {
     expect(renderJson({} as Report)).toBe('{}\n');
     // arrays longer than one serialisation batch, ending on and off a batch boundary
     for (const n of [511, 512, 513, 1024, 1300]) {
-      const many = { ...report, findings: Array.from({ length: n }, (_, i) => ({ ...report.findings[i % 2]!, location: { file: 'f.csv', line: i + 2 } })) } as Report;
+      const many = { ...report, findings: Array.from({ length: n }, (_, i) => ({ ...[...report.findings][i % 2]!, location: { file: 'f.csv', line: i + 2 } })) } as Report;
       expectReport([...jsonChunks(many)].join(''), many);
     }
   });

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { check } from '../../pipeline/check.js';
+import { checkArrays, type ArrayReport } from '../check-arrays.js';
 import { normalizeOptions } from '../../pipeline/options.js';
 import { DEFAULT_U, judgeSources, rule } from '../../pipeline/rules/cross-source.js';
 import { tempFile } from '../ingest/helpers.js';
@@ -91,7 +91,7 @@ describe('cross-source: one odd source', () => {
     const a = tempFile(csv(CO2.filter((r) => r[4] !== 'planted odd source')));
     // −383.5 kJ/mol = −91.659 kcal/mol (thermochemical calorie 4.184 J, exact)
     const b = tempFile('species,phase,dHf [kcal/mol],source\nCO2,g,-91.6587,planted odd source\n');
-    const report = await check(normalizeOptions({ tables: [a, b] }), { version: 't', generatedAt: '' });
+    const report = await checkArrays(normalizeOptions({ tables: [a, b] }), { version: 't', generatedAt: '' });
     const f = report.findings.filter((x) => x.rule === 'cross-source');
     expect(f).toHaveLength(1);
     expect(f[0]!.location).toMatchObject({ file: expect.stringContaining(b.split('/').pop()!), line: 2 });
@@ -103,7 +103,7 @@ describe('cross-source: tables merged from several files without a source column
   it('takes each file for a source and names the odd file', async () => {
     // NH3(g) ΔfH° from CODATA (−45.94), JANAF (−45.898), NBS (−46.11); a fourth file planted 10 kJ/mol off
     const files = [-45.94, -45.898, -46.11, -35.94].map((v) => tempFile(`species,phase,dHf\nNH3,g,${v}\n`));
-    const report = await check(normalizeOptions({ tables: files }), { version: 't', generatedAt: '' });
+    const report = await checkArrays(normalizeOptions({ tables: files }), { version: 't', generatedAt: '' });
     const f = report.findings.filter((x) => x.rule === 'cross-source');
     expect(f).toHaveLength(1);
     expect(f[0]!.location.file).toBe(report.provenance.inputs[3]!.path);

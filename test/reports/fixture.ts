@@ -128,7 +128,7 @@ export const HOSTILE_IMG = '<img src=x onerror="window.__pwned=1">';
 export const HOSTILE_SCRIPT = '<script>window.__pwned=2</script>';
 
 /** A report as check() would return it for four gases, optionally with hostile names in every text field. */
-export function makeReport(opts: { hostile?: boolean } = {}): Report & { species: SpeciesSummary[] } {
+export function makeReport(opts: { hostile?: boolean } = {}): Report & { species: SpeciesSummary[]; findings: Finding[] } {
   const file = 'datasets/fixture/gases.csv';
   const species = [summary(SOURCES.CO!, file, 2), summary(SOURCES.H2O!, file, 3), summary(SOURCES.CO2!, file, 4), summary(SOURCES.H2!, file, 5)];
   // residuals as a defective table would give them (kJ/mol): one slip, one small drift, the rest clean

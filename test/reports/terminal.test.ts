@@ -6,7 +6,9 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { createProgress, estimateRows } from '../../reports/progress.js';
-import { renderTerminal } from '../../reports/terminal.js';
+import fc from 'fast-check';
+import { renderTerminal, worstFindings } from '../../reports/terminal.js';
+import type { Finding } from '../../pipeline/types.js';
 import { makeReport } from './fixture.js';
 import { CLI, NO_STACK, thermovet } from '../cli/run.js';
 
@@ -110,5 +112,33 @@ describe('the terminal summary', () => {
     expect(heading.length).toBeLessThan(100);
     expect(heading.endsWith('…')).toBe(true);
     expect(text).not.toContain('\u001b');
+  });
+});
+
+describe('worst findings', () => {
+  const RANK = { error: 0, warning: 1, info: 2 } as const;
+  const impact = (f: Finding): number => f.impact?.reduce((m, i) => Math.max(m, i.maxAbsDeltaLnK), 0) ?? 0;
+  /** the definition: sort everything (stable), keep, take the first `limit` */
+  const oracle = (fs: Finding[], limit: number, keep: (f: Finding) => boolean): Finding[] =>
+    [...fs].sort((a, b) => Number(!!a.waived) - Number(!!b.waived) || RANK[a.severity] - RANK[b.severity] || impact(b) - impact(a)).filter(keep).slice(0, limit);
+  const findingArb = fc.record({
+    severity: fc.constantFrom<Finding['severity']>('error', 'warning', 'info'),
+    waived: fc.boolean(),
+    impact: fc.option(fc.constantFrom(0, 0.5, 2, 7), { nil: undefined }),
+    line: fc.nat(1000),
+  }).map(({ severity, waived, impact: m, line }): Finding => ({
+    rule: 'r', severity, messageId: 'm', params: {}, message: `line ${line}`, location: { file: 'f.csv', line },
+    ...(waived ? { waived: { by: 'a', reason: 'b', expires: '2030-01-01' } } : {}),
+    ...(m !== undefined ? { impact: [{ reaction: 'R', maxAbsDeltaLnK: m }] } : {}),
+  }));
+
+  it('selects in one pass exactly what sorting all of them and taking the first would give', () => {
+    fc.assert(
+      fc.property(fc.array(findingArb, { maxLength: 80 }), fc.nat(30), fc.boolean(), (fs, limit, dropInfo) => {
+        const keep = (f: Finding): boolean => !dropInfo || f.severity !== 'info';
+        expect(worstFindings(fs, limit, keep)).toEqual(oracle(fs, limit, keep));
+      }),
+      { numRuns: 500 },
+    );
   });
 });

@@ -93,7 +93,7 @@ describe('applyWaivers', () => {
     const out = waiveReport(r, [waiver({ species: 'CO2' }), waiver({ species: 'nobody', location: { file: 'a-waivers.yaml', line: 3 } })], '2030-01-01');
     expect(out.summary.errors).toBe(before - 1);
     expect(out.summary.warnings).toBe(1); // the unmatched waiver
-    expect(out.findings[0]!.rule).toBe('waiver-unmatched'); // a-waivers.yaml sorts before datasets/
+    expect([...out.findings][0]!.rule).toBe('waiver-unmatched'); // a-waivers.yaml sorts before datasets/
   });
 });
 

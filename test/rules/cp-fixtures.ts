@@ -16,9 +16,9 @@
 import { mkdtempSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { check } from '../../pipeline/check.js';
+import { checkArrays, type ArrayReport } from '../check-arrays.js';
 import { normalizeOptions } from '../../pipeline/options.js';
-import type { Finding, Report, UseWindow } from '../../pipeline/types.js';
+import type { Finding, UseWindow } from '../../pipeline/types.js';
 import { SPECIES } from '../cp/published-data.js';
 
 export interface CpRow {
@@ -70,7 +70,7 @@ const dir = mkdtempSync(join(tmpdir(), 'thermovet-cp-'));
 let n = 0;
 
 /** Runs the whole check on the rows (and a manifest carrying `useWindow` when given). */
-export async function runRows(rows: readonly CpRow[], useWindow?: UseWindow): Promise<Report> {
+export async function runRows(rows: readonly CpRow[], useWindow?: UseWindow): Promise<ArrayReport> {
   const k = ++n;
   const table = join(dir, `cp${k}.csv`);
   writeFileSync(table, csvOf(rows));
@@ -86,7 +86,7 @@ export async function runRows(rows: readonly CpRow[], useWindow?: UseWindow): Pr
   } else {
     options = normalizeOptions({ tables: [table] });
   }
-  const report = await check(options, { version: 'test', generatedAt: '1970-01-01T00:00:00.000Z' });
+  const report = await checkArrays(options, { version: 'test', generatedAt: '1970-01-01T00:00:00.000Z' });
   // a defect test that passes because its row was rejected on ingest would prove nothing
   if (report.summary.rejected > 0) {
     throw new Error(`rows rejected on ingest: ${report.findings.map((f) => `line ${f.location.line} ${f.rule}: ${f.message}`).join('; ')}`);
@@ -95,12 +95,12 @@ export async function runRows(rows: readonly CpRow[], useWindow?: UseWindow): Pr
 }
 
 /** The findings of the Cp rules only. */
-export function cpFindings(report: Report): Finding[] {
+export function cpFindings(report: ArrayReport): Finding[] {
   return report.findings.filter((f) => f.rule.startsWith('cp-'));
 }
 
 /** Findings of `rule` on 1-based `line`. */
-export function on(report: Report, rule: string, line: number): Finding[] {
+export function on(report: ArrayReport, rule: string, line: number): Finding[] {
   return report.findings.filter((f) => f.rule === rule && f.location.line === line);
 }
 

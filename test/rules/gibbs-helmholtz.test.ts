@@ -1,12 +1,12 @@
 import { describe, expect, it } from 'vitest';
-import { check } from '../../pipeline/check.js';
+import { checkArrays, type ArrayReport } from '../check-arrays.js';
 import { normalizeOptions } from '../../pipeline/options.js';
 import type { Report } from '../../pipeline/types.js';
 import { tempFile } from '../ingest/helpers.js';
 import { csvOf, PUBLISHED, type Published } from './published.js';
 
-async function run(csv: string, ext = 'csv'): Promise<Report> {
-  return check(normalizeOptions({ tables: [tempFile(csv, ext)] }), { version: 'test', generatedAt: '1970-01-01T00:00:00.000Z' });
+async function run(csv: string, ext = 'csv'): Promise<ArrayReport> {
+  return checkArrays(normalizeOptions({ tables: [tempFile(csv, ext)] }), { version: 'test', generatedAt: '1970-01-01T00:00:00.000Z' });
 }
 
 describe('gibbs-helmholtz on published data', () => {

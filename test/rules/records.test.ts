@@ -1,12 +1,12 @@
 import { describe, expect, it } from 'vitest';
-import { check } from '../../pipeline/check.js';
+import { checkArrays, type ArrayReport } from '../check-arrays.js';
 import { normalizeOptions } from '../../pipeline/options.js';
 import { SpeciesStore } from '../../pipeline/records.js';
 import { readTable, tempFile } from '../ingest/helpers.js';
 
 // CO2(g): ΔfH° −393.522 kJ/mol, ΔfG° −394.389 kJ/mol, S° 213.795 J/(mol K) (CODATA 1989; NIST-JANAF 1998).
 const head = 'species,phase,dHf,dGf,S\n';
-const run = (...tables: string[]) => check(normalizeOptions({ tables }), { version: 't', generatedAt: '1970-01-01T00:00:00.000Z' });
+const run = (...tables: string[]) => checkArrays(normalizeOptions({ tables }), { version: 't', generatedAt: '1970-01-01T00:00:00.000Z' });
 
 describe('folding rows into species', () => {
   it('the same file repeating a species with another value is a conflict on the later line', async () => {

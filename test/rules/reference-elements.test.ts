@@ -2,16 +2,16 @@
 // Values: CODATA Key Values for Thermodynamics (Cox, Wagman, Medvedev 1989) for the reference entropies and
 // O(g); NBS Tables (Wagman et al. 1982) for C(diamond), from memory.
 import { describe, expect, it } from 'vitest';
-import { check } from '../../pipeline/check.js';
+import { checkArrays, type ArrayReport } from '../check-arrays.js';
 import { normalizeOptions } from '../../pipeline/options.js';
 import type { Report } from '../../pipeline/types.js';
 import { tempFile } from '../ingest/helpers.js';
 
-async function run(csv: string): Promise<Report> {
-  return check(normalizeOptions({ tables: [tempFile(csv, 'csv')] }), { version: 'test', generatedAt: '1970-01-01T00:00:00.000Z' });
+async function run(csv: string): Promise<ArrayReport> {
+  return checkArrays(normalizeOptions({ tables: [tempFile(csv, 'csv')] }), { version: 'test', generatedAt: '1970-01-01T00:00:00.000Z' });
 }
 
-const ruleHits = (r: Report) =>
+const ruleHits = (r: ArrayReport) =>
   r.findings.filter((f) => f.rule === 'reference-elements').map((f) => [f.location.line, f.messageId, f.location.field, f.severity]);
 
 describe('reference-elements', () => {
