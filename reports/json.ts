@@ -6,10 +6,7 @@
 // A report of 10^6 rows holds 10^5–10^6 species summaries: as one string it would cost a few hundred
 // MB at once. `jsonChunks` yields the text piece by piece (32 array elements at a time), and
 // `writeJson` writes it to disk atomically without ever holding the whole text.
-import { closeSync, openSync, renameSync, rmSync, writeSync } from 'node:fs';
-import { basename, dirname, join } from 'node:path';
-import { InputError } from '../pipeline/errors.js';
-import { makeDirs } from './write.js';
+import { writeAtomicChunks } from './write.js';
 import type { Finding, Report } from '../pipeline/types.js';
 
 /** A finding as the JSON report writes it: file and line lifted beside rule, severity, species and phase. */
@@ -89,24 +86,5 @@ export function* jsonChunks(report: Report): Generator<string> {
 
 /** Writes the JSON report to `path` through a temporary file and a rename (a killed run leaves no half report). */
 export function writeJson(path: string, report: Report): void {
-  const dir = dirname(path);
-  const tmp = join(dir, `.${basename(path)}.${process.pid}.tmp`);
-  let fd: number | undefined;
-  try {
-    makeDirs(dir);
-    fd = openSync(tmp, 'w');
-    for (const piece of jsonChunks(report)) writeSync(fd, piece);
-    closeSync(fd);
-    fd = undefined;
-    renameSync(tmp, path);
-  } catch (e) {
-    try {
-      if (fd !== undefined) closeSync(fd);
-      rmSync(tmp, { force: true });
-    } catch {
-      // nothing was created there
-    }
-    const code = (e as NodeJS.ErrnoException).code ?? 'error';
-    throw new InputError('unwritable-output', `cannot write the report (${code})`, { file: path });
-  }
+  writeAtomicChunks(path, jsonChunks(report));
 }

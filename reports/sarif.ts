@@ -100,6 +100,17 @@ function result(f: Finding, ruleIndex: Map<string, number>, columns: FieldColumn
 
 /** SARIF 2.1.0 log of the report; deterministic for a deterministic report. */
 export function renderSarif(report: Report, opts: SarifOptions = {}): string {
+  return [...sarifChunks(report, opts)].join('');
+}
+
+const RESULTS_HERE = '\u0000results\u0000';
+
+/**
+ * The text of renderSarif in pieces, each result made as it is written: a report with a finding on each
+ * of 10^6 rows would be one string of more than a gigabyte, longer than a JavaScript string can be.
+ * The bytes are those of JSON.stringify(log, null, 2) + '\n'.
+ */
+export function* sarifChunks(report: Report, opts: SarifOptions = {}): Generator<string> {
   const ruleIndex = new Map(RULES.map((r, i) => [r.id, i]));
   const log = {
     $schema: SARIF_SCHEMA_URI,
@@ -117,7 +128,7 @@ export function renderSarif(report: Report, opts: SarifOptions = {}): string {
         columnKind: 'unicodeCodePoints',
         artifacts: report.provenance.inputs.map((i) => ({ location: { uri: pathToUri(i.path) }, length: i.bytes, hashes: { 'sha-256': i.sha256 } })),
         invocations: [{ executionSuccessful: true, endTimeUtc: report.provenance.generatedAt }],
-        results: Array.from(report.findings, (f) => result(f, ruleIndex, opts.columns)),
+        results: report.findings.length === 0 ? [] : [RESULTS_HERE],
         properties: {
           summary: report.summary,
           caution: 'Screening, not certification: results must be reviewed by a qualified engineer; local codes and licensed practice govern design.',
@@ -125,7 +136,26 @@ export function renderSarif(report: Report, opts: SarifOptions = {}): string {
       },
     ],
   };
-  return JSON.stringify(log, null, 2) + '\n';
+  const text = JSON.stringify(log, null, 2) + '\n';
+  const at = text.indexOf(JSON.stringify(RESULTS_HERE));
+  if (at < 0) {
+    yield text;
+    return;
+  }
+  const lineStart = text.lastIndexOf('\n', at) + 1;
+  const indent = text.slice(lineStart, at); // the results' depth in the log
+  yield text.slice(0, lineStart);
+  let piece = '';
+  let written = 0;
+  for (const f of report.findings) {
+    // a result's own lines shifted to the array's depth (JSON strings never hold a raw line feed)
+    piece += indent + JSON.stringify(result(f, ruleIndex, opts.columns), null, 2).replace(/\n/g, '\n' + indent) + (++written < report.findings.length ? ',\n' : '\n');
+    if (written % 32 === 0) {
+      yield piece;
+      piece = '';
+    }
+  }
+  yield piece + text.slice(text.indexOf('\n', at) + 1);
 }
 
 /** 1-based [start, end) code-point columns of each field on a delimited line; quotes respected. */
@@ -169,7 +199,8 @@ export async function fieldColumns(report: Report): Promise<FieldColumns> {
     const format = formats.get(file);
     if (format !== 'csv' && format !== 'tsv') continue;
     const delimiter = format === 'tsv' ? '\t' : ',';
-    const last = Math.max(...lines.keys());
+    let last = 0; // a loop: one line per finding can be too many arguments for Math.max(...)
+    for (const n of lines.keys()) if (n > last) last = n;
     let n = 0;
     try {
       const rl = createInterface({ input: createReadStream(file), crlfDelay: Infinity });

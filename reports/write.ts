@@ -1,6 +1,6 @@
 // Reports are written atomically: a temporary file beside the target, then a rename, so a killed run
 // never leaves a truncated report that CI could take for a valid one.
-import { mkdirSync, renameSync, rmSync, statSync, writeFileSync } from 'node:fs';
+import { closeSync, mkdirSync, openSync, renameSync, rmSync, statSync, writeFileSync, writeSync } from 'node:fs';
 import { basename, dirname, join } from 'node:path';
 import { InputError } from '../pipeline/errors.js';
 
@@ -37,6 +37,30 @@ export function writeAtomic(path: string, content: string): void {
   } catch (e) {
     try {
       rmSync(tmp, { force: true }); // `force` ignores only ENOENT; under a regular file this throws ENOTDIR
+    } catch {
+      // nothing was created there
+    }
+    const code = (e as NodeJS.ErrnoException).code ?? 'error';
+    throw new InputError('unwritable-output', `cannot write the report (${code})`, { file: path });
+  }
+}
+
+/** The same, for a report made in pieces (JSON, SARIF): written as they come, never held as one string. */
+export function writeAtomicChunks(path: string, chunks: Iterable<string>): void {
+  const dir = dirname(path);
+  const tmp = join(dir, `.${basename(path)}.${process.pid}.tmp`);
+  let fd: number | undefined;
+  try {
+    makeDirs(dir);
+    fd = openSync(tmp, 'w');
+    for (const piece of chunks) writeSync(fd, piece);
+    closeSync(fd);
+    fd = undefined;
+    renameSync(tmp, path);
+  } catch (e) {
+    try {
+      if (fd !== undefined) closeSync(fd);
+      rmSync(tmp, { force: true });
     } catch {
       // nothing was created there
     }

@@ -2,13 +2,13 @@
 import { Option, type Command } from 'commander';
 import { writeJson } from '../../reports/json.js';
 import { renderTerminal } from '../../reports/terminal.js';
-import { writeAtomic } from '../../reports/write.js';
+import { writeAtomic, writeAtomicChunks } from '../../reports/write.js';
 import { check } from '../check.js';
 import { normalizeOptions, type Options } from '../options.js';
 import { exitCodeFor } from '../verdict.js';
 import { generatedAt, useColor, version, waiverDay } from './shared.js';
 import { createProgress, estimateRows } from '../../reports/progress.js';
-import { fieldColumns, renderSarif } from '../../reports/sarif.js';
+import { fieldColumns, sarifChunks } from '../../reports/sarif.js';
 import { fileDigest } from '../provenance.js';
 import { loadWaivers, waiveReport } from '../waivers.js';
 
@@ -46,7 +46,7 @@ async function runCheck(tables: string[], flags: CheckFlags): Promise<number> {
       const inputs = [...report.provenance.inputs, await fileDigest(options.waiversFile)];
       report = { ...report, provenance: { ...report.provenance, inputs, options: { ...report.provenance.options, waivers: options.waiversFile } } };
     }
-    if (flags.sarif) writeAtomic(flags.sarif, renderSarif(report, { columns: await fieldColumns(report) }));
+    if (flags.sarif) writeAtomicChunks(flags.sarif, sarifChunks(report, { columns: await fieldColumns(report) }));
     if (flags.html) {
       // loaded only when asked for: the chart library costs a quarter of a second to import
       const { renderHtml } = await import('../../reports/html/template.js');

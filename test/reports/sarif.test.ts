@@ -7,7 +7,7 @@ import { Ajv2020 } from 'ajv/dist/2020.js';
 import addFormats from 'ajv-formats';
 import { describe, expect, it } from 'vitest';
 import { RULES } from '../../pipeline/rules/index.js';
-import { pathToUri, renderSarif, splitColumns } from '../../reports/sarif.js';
+import { pathToUri, renderSarif, sarifChunks, splitColumns } from '../../reports/sarif.js';
 import { readReport, thermovet } from '../cli/run.js';
 import { makeReport } from './fixture.js';
 
@@ -24,6 +24,16 @@ function valid(text: string): any {
 const dir = mkdtempSync(join(tmpdir(), 'thermovet-sarif-'));
 
 describe('renderSarif', () => {
+  it('is written in pieces with the bytes JSON.stringify(log, null, 2) gives: no findings, a few, and more than one piece holds', () => {
+    const r = makeReport({ hostile: true });
+    for (const n of [0, 1, r.findings.length, 31, 32, 33, 100]) {
+      const findings = Array.from({ length: n }, (_, i) => ({ ...r.findings[i % r.findings.length]!, location: { file: 'big.csv', line: i + 2 } }));
+      const text = [...sarifChunks({ ...r, findings })].join('');
+      expect(text).toBe(JSON.stringify(valid(text), null, 2) + '\n');
+      expect(valid(text).runs[0].results).toHaveLength(n);
+    }
+  });
+
   it('the schema itself rejects a broken log (so validation can fail)', () => {
     expect(validateSarif({ version: '2.1.0', runs: [{ tool: { driver: { name: 'x' } }, results: [{ message: { text: 'm' }, level: 'fatal' }] }] })).toBe(false);
     expect(validateSarif({ version: '2.1.0' })).toBe(false);
