@@ -81,10 +81,15 @@ export function explainResidual(
   explainedJ: number,
 ): SlipFit | undefined {
   let best: SlipFit | undefined;
+  // When zero leaves the residual as small (a value the convention sets to 0, such as S° of H+(aq)),
+  // a correction that only shrinks the value towards zero cannot be told from "this should be 0".
+  const zeroFits = { dHf: false, dGf: false, S: false };
+  for (const field of ['dHf', 'dGf', 'S'] as const) zeroFits[field] = Math.abs(residualOf({ ...values, [field]: 0 })) <= explainedJ;
   for (const slip of SLIPS) {
     for (const field of slip.fields) {
       const correctedSI = slip.correct(values[field], phase);
       if (correctedSI === values[field]) continue;
+      if (zeroFits[field] && Math.abs(correctedSI) < Math.abs(values[field])) continue;
       const residualAfterJ = residualOf({ ...values, [field]: correctedSI });
       if (Math.abs(residualAfterJ) <= explainedJ && (!best || Math.abs(residualAfterJ) < Math.abs(best.residualAfterJ))) {
         best = { slip, field, correctedSI, residualAfterJ };

@@ -60,6 +60,16 @@ describe('slip diagnosis on real species', () => {
     });
   }
 
+  it('does not call a value that should be zero a 1000× slip: H+(aq) given the entropy of H2(g)', async () => {
+    // ΔfH°, ΔfG° and S° of H+(aq) are 0 by convention (fact of the trade); 130.68 J/(mol K) is S° of
+    // H2(g) (CODATA Key Values). Dividing it by 1000 also closes the residual, as any S near 0 would.
+    const report = await run(csvOf([{ species: 'H+', phase: 'aq', dHf: 0, dGf: 0, S: 130.68, source: 'invented: a convention value replaced' }]));
+    const gh = report.findings.filter((f) => f.rule === 'gibbs-helmholtz');
+    expect(gh).toHaveLength(1);
+    expect(gh[0]!.messageId).toBe('residual');
+    expect(gh[0]!.diagnosis).toBeUndefined();
+  });
+
   it('states the correction in the declared unit (kcal/mol column, sign slip)', async () => {
     const water = PUBLISHED[0]!;
     const csv = `species,phase,dHf [kcal/mol],dGf [kcal/mol],S\nH2O,g,${water.dHf / 4.184},${-water.dGf / 4.184},${water.S}\n`;
