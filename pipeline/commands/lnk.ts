@@ -66,7 +66,7 @@ async function runLnk(tables: string[], flags: LnkFlags): Promise<number> {
   }
   (flags.equation ?? []).forEach((eq, i) => {
     try {
-      specs.push(reactionFromEquation(`eq${i + 1}`, eq, { file: '(command line)', line: i + 1 }));
+      specs.push(reactionFromEquation(`eq${i + 1}`, eq, { file: 'command line', line: i + 1 }));
     } catch (e) {
       if (e instanceof EquationError) throw new InputError('bad-equation', `--equation "${excerpt(eq)}": ${e.message}`);
       throw e;

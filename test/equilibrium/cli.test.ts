@@ -78,6 +78,9 @@ describe('thermovet lnk (built CLI)', () => {
     expect(rows[1]).toMatch(/NH3\(g\) Cp extrapolated 100 K/);
     expect(r.stdout).toMatch(/qualified engineer/);
     expect(r.stderr).toMatch(/reaction-extrapolation/);
+    // an equation given with -e is located on the command line, by its place among the -e options
+    expect(r.stdout).toContain('(command line:1)');
+    expect(r.stderr).toMatch(/^command line:1: warning: /m);
   });
 
   it('a manifest supplies the reactions file and the use window', () => {
