@@ -12,12 +12,10 @@ import { loadReference } from '../chemistry/reference.js';
 import { loadReactions, type ReactionSpec } from '../equilibrium/reactions.js';
 import { loadSpecies } from '../equilibrium/species.js';
 import { normalizeOptions, type Options } from '../options.js';
-import { DATASET_RULES } from '../rules/index.js';
-import type { CheckContext, FailOn, Finding, OptionsNormalized, Report, Severity, Species, UseWindow } from '../types.js';
+import type { FailOn, Finding, OptionsNormalized, Report, Severity, Species, UseWindow } from '../types.js';
 import { loadWaivers, waiveReport } from '../waivers.js';
 import { compareFindings, compareSpeciesLists, type SpeciesDiff } from './compare.js';
 import { lnKImpact, type ReactionDiff } from './lnk.js';
-import { arrayList } from '../species-list.js';
 
 export interface DiffVersionInput {
   path: string;
@@ -82,23 +80,6 @@ export function optionsFor(v: DiffVersionInput, failOn: FailOn, reactions?: stri
   return normalizeOptions(o);
 }
 
-const findingId = (f: Finding): string => `${f.rule}|${f.messageId}|${f.location.file}|${f.location.line}|${f.location.field ?? ''}|${f.species ?? ''}|${f.phase ?? ''}`;
-
-/**
- * Findings of the dataset rules (family-trend, entropy-atoms) for runs of check() that did not produce
- * them (check() runs per-species rules only until it calls DatasetRule.checkAll). A finding check()
- * already gave is not added twice.
- */
-export function withDatasetFindings(report: Report, species: readonly Species[], ctx: CheckContext): Report {
-  const have = new Set(Array.from(report.findings, findingId));
-  const extra = DATASET_RULES.flatMap((r) => r.checkAll(arrayList(species), ctx)).filter((f) => !have.has(findingId(f)));
-  if (extra.length === 0) return report;
-  const findings = [...report.findings, ...extra].sort(byLocation);
-  const count = (s: Severity): number => extra.filter((f) => f.severity === s && !f.waived).length;
-  const summary = { ...report.summary, errors: report.summary.errors + count('error'), warnings: report.summary.warnings + count('warning'), infos: report.summary.infos + count('info') };
-  return { ...report, findings, summary };
-}
-
 interface Loaded {
   options: OptionsNormalized;
   report: Report;
@@ -109,7 +90,6 @@ async function loadVersion(v: DiffVersionInput, opts: DiffOptions, run: { versio
   const options = optionsFor(v, opts.failOn, opts.reactionsFile);
   let report = await check(options, run);
   const { species } = await loadSpecies(options);
-  report = withDatasetFindings(report, species, { options, reference: loadReference() });
   if (options.waiversFile) report = waiveReport(report, loadWaivers(options.waiversFile), run.waiverDay);
   return { options, report, species };
 }

@@ -1,7 +1,7 @@
 // `thermovet export`: the vetted rows of a dataset as one canonical CSV, with a provenance header and
 // the JSON report beside it.
 //
-// 1. check() the tables (waivers applied when the options name a waivers file), plus the dataset rules.
+// 1. check() the tables (waivers applied when the options name a waivers file).
 // 2. Decide what is left out: every row of a species with an unwaived finding at or above `dropOn`
 //    (its data are what the finding is about), except for findings that concern one row of a species
 //    with several (cross-source, conflicting-values): those leave out that row only. Exact repeats
@@ -11,17 +11,16 @@
 import { closeSync, fsyncSync, openSync, renameSync, rmSync, writeSync } from 'node:fs';
 import { createHash } from 'node:crypto';
 import { basename, dirname, join, resolve } from 'node:path';
-import { renderJson } from '../../reports/json.js';
+import { jsonChunks } from '../../reports/json.js';
 import { inert } from '../../reports/terminal.js';
-import { makeDirs, writeAtomic } from '../../reports/write.js';
+import { makeDirs, writeAtomicChunks } from '../../reports/write.js';
 import { check } from '../check.js';
-import { loadReference } from '../chemistry/reference.js';
-import { withDatasetFindings } from '../diff/index.js';
 import { sourceOf } from '../rules/cross-source.js';
-import { loadSpecies } from '../equilibrium/species.js';
+import { loadStore } from '../equilibrium/species.js';
 import { InputError } from '../errors.js';
 import { ingestTable } from '../ingest/table.js';
-import type { Finding, OptionsNormalized, Report, Severity, Species } from '../types.js';
+import type { SpeciesList } from '../species-list.js';
+import type { FindingList, OptionsNormalized, Report, Severity } from '../types.js';
 import { loadWaivers, waiveReport } from '../waivers.js';
 import { headerLine, R_USED, rowCells } from './csv.js';
 
@@ -70,9 +69,19 @@ export interface LeftOut {
  * a conflicting-values or duplicate-row finding its own row; any other finding on a species all of
  * its rows.
  */
-export function leftOut(findings: readonly Finding[], species: readonly Species[], dropOn: DropOn): LeftOut {
-  const byRow = new Map<string, { sp: Species; source: string }>();
-  for (const sp of species) for (const v of sp.values) byRow.set(rowKey(v.location.file, v.location.line), { sp, source: sourceOf(v) });
+export function leftOut(findings: FindingList, species: SpeciesList, dropOn: DropOn): LeftOut {
+  // which species and source gave each row a finding points at: only those rows are looked up, so
+  // the species are built one at a time and a 10^6-row table is never held as objects
+  const pointed = new Set<string>();
+  for (const f of findings) pointed.add(rowKey(f.location.file, f.location.line));
+  const byRow = new Map<string, { name: string; phase: string; source: string; firstSource: string }>();
+  for (let i = 0; i < species.length; i++) {
+    const sp = species.at(i);
+    for (const v of sp.values) {
+      const at = rowKey(v.location.file, v.location.line);
+      if (pointed.has(at)) byRow.set(at, { name: sp.name, phase: sp.phase, source: sourceOf(v), firstSource: sourceOf(sp.values[0]!) });
+    }
+  }
   const out: LeftOut = { species: new Set(), sources: new Set(), rows: new Set() };
   for (const f of findings) {
     const at = rowKey(f.location.file, f.location.line);
@@ -86,7 +95,7 @@ export function leftOut(findings: readonly Finding[], species: readonly Species[
       continue;
     }
     const row = byRow.get(at);
-    if (row && row.sp.name === f.species && row.sp.phase === f.phase && (f.rule === 'cross-source' || row.source !== sourceOf(row.sp.values[0]!))) {
+    if (row && row.name === f.species && row.phase === f.phase && (f.rule === 'cross-source' || row.source !== row.firstSource)) {
       out.sources.add(sourceKey(f.species, f.phase, row.source));
     } else out.species.add(`${f.species}|${f.phase}`);
   }
@@ -138,14 +147,19 @@ const comment = (text: string): string => `# ${inert(text)}\n`;
 
 export async function exportTables(options: OptionsNormalized, opts: ExportOptions, run: { version: string; generatedAt: string; waiverDay: string }): Promise<ExportResult> {
   let report = await check(options, run);
-  const { species } = await loadSpecies(options);
-  report = withDatasetFindings(report, species, { options, reference: loadReference() });
   if (options.waiversFile) report = waiveReport(report, loadWaivers(options.waiversFile), run.waiverDay);
-  const drop = leftOut([...report.findings], species, opts.dropOn);
+  const { store } = await loadStore(options); // check() keeps no rows: which row gave which source is read again
+  const drop = leftOut(report.findings, store.view(), opts.dropOn);
 
   const reportPath = opts.reportPath ?? defaultReportPath(opts.out);
-  const json = renderJson(report);
-  writeAtomic(reportPath, json);
+  const reportHash = createHash('sha256');
+  writeAtomicChunks(reportPath, (function* () {
+    for (const piece of jsonChunks(report)) {
+      reportHash.update(piece);
+      yield piece;
+    }
+  })());
+  const reportDigest = reportHash.digest('hex');
 
   const w = new AtomicWriter(opts.out);
   let rowsRead = 0;
@@ -160,7 +174,7 @@ export async function exportTables(options: OptionsNormalized, opts: ExportOptio
     if (options.manifestPath) w.write(comment(`manifest ${options.manifestPath}`));
     if (options.waiversFile) w.write(comment(`waivers ${options.waiversFile} (waived findings do not leave rows out)`));
     w.write(comment(`reference ${report.provenance.reference.path} sha256 ${report.provenance.reference.sha256}`));
-    w.write(comment(`report ${reportPath} sha256 ${createHash('sha256').update(json).digest('hex')}`));
+    w.write(comment(`report ${reportPath} sha256 ${reportDigest}`));
     w.write(
       comment(
         `left out: rows rejected on reading; every row of a species with an unwaived finding at or above ${opts.dropOn}, ` +
