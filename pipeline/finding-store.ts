@@ -4,7 +4,7 @@
 // species name in a name table (~100 bytes), and its message is rendered again from the rule's
 // template when the finding is made into an object, which happens only as a writer reads it (`at`,
 // iteration). The rare parts (a message that is not its template filled in, params JSON cannot carry,
-// diagnosis, impact, waiver) are kept as they are, by index.
+// a line or column that is not a 32-bit integer, diagnosis, impact, waiver) are kept as they are, by index.
 import { compareFindings } from './check.js';
 import { NameTable } from './name-table.js';
 import { renderTemplate, templateOf } from './rules/finding.js';
@@ -13,6 +13,8 @@ import type { Diagnosis, Finding, FindingList, Location, Severity } from './type
 
 /** Bytes per chunk of the params pool; params longer than this are kept as objects. */
 const POOL_CHUNK = 1 << 20;
+
+const int32 = (x: number): boolean => Number.isInteger(x) && x >= -0x80000000 && x <= 0x7fffffff && !Object.is(x, -0);
 
 /** What JSON gives back exactly: finite numbers other than −0, strings, and keys that are not array indices. */
 function jsonSafe(params: Record<string, number | string>): boolean {
@@ -44,6 +46,7 @@ export class FindingStore implements FindingList {
   private readonly rare = {
     params: new Map<number, Record<string, number | string>>(),
     message: new Map<number, string>(),
+    location: new Map<number, Location>(), // a line or column the columns cannot hold (not a 32-bit integer)
     diagnosis: new Map<number, Diagnosis>(),
     impact: new Map<number, NonNullable<Finding['impact']>>(),
     waived: new Map<number, NonNullable<Finding['waived']>>(),
@@ -65,6 +68,7 @@ export class FindingStore implements FindingList {
     this.line.push(loc.line);
     this.column.push(loc.column ?? -1);
     this.field.push(loc.field === undefined ? -1 : this.texts.id(loc.field));
+    if (!int32(loc.line) || (loc.column !== undefined && !(int32(loc.column) && loc.column >= 0))) this.rare.location.set(i, { ...loc });
     this.species.push(f.species === undefined ? -1 : this.names.id(f.species));
     this.phase.push(f.phase === undefined ? -1 : this.texts.id(f.phase));
     this.addParams(i, f.params);
@@ -105,11 +109,15 @@ export class FindingStore implements FindingList {
   /** Finding i in input order, as an object made afresh (keys in the order makeFinding gives them). */
   private make(i: number): Finding {
     const { rule, severity, messageId, template } = this.kindParts[this.kind.get(i)]!;
-    const location: Location = { file: this.texts.get(this.file.get(i)), line: this.line.get(i) };
-    const column = this.column.get(i);
-    if (column >= 0) location.column = column;
-    const field = this.field.get(i);
-    if (field >= 0) location.field = this.texts.get(field);
+    let location = this.rare.location.get(i);
+    if (location) location = { ...location };
+    else {
+      location = { file: this.texts.get(this.file.get(i)), line: this.line.get(i) };
+      const column = this.column.get(i);
+      if (column >= 0) location.column = column;
+      const field = this.field.get(i);
+      if (field >= 0) location.field = this.texts.get(field);
+    }
     const f: Finding = { rule, severity, messageId, params: this.params(i), message: '', location };
     const species = this.species.get(i);
     if (species >= 0) f.species = this.names.name(species);
@@ -157,7 +165,9 @@ export class FindingStore implements FindingList {
     const ruleOf = (i: number): string => this.kindParts[this.kind.get(i)]!.rule;
     const order = new Int32Array(n);
     for (let i = 0; i < n; i++) order[i] = i;
+    const odd = this.rare.location;
     order.sort((a, b) => {
+      if (odd.size > 0 && (odd.has(a) || odd.has(b))) return compareFindings(this.make(a), this.make(b)) || a - b;
       if (this.file.get(a) !== this.file.get(b)) {
         const fa = fileOf(a);
         const fb = fileOf(b);

@@ -20,7 +20,13 @@ const text = fc.oneof(fc.string(), fc.string({ unit: 'binary' }), fc.constantFro
 const num = fc.oneof(fc.double(), fc.constantFrom(0, -0, NaN, Infinity, -Infinity, 1e-300, 5e-324, 2 ** 53, 0.1 + 0.2));
 const params = fc.dictionary(fc.oneof(fc.constantFrom('species', 'value', 'unit', 'T', 'x', 'y', '0', '12'), fc.string({ maxLength: 4 })), fc.oneof(text, num), { maxKeys: 5 });
 const location = fc.record(
-  { file: fc.constantFrom('a.csv', 'b.csv', 'dir/Ä.tsv', ''), line: fc.integer({ min: 0, max: 30 }), column: fc.integer({ min: 0, max: 3 }), field: fc.constantFrom('dHf', 'S', 'cp_coeffs') },
+  {
+    file: fc.constantFrom('a.csv', 'b.csv', 'dir/Ä.tsv', ''),
+    // lines and columns as tables give them, and a few the store's 32-bit columns cannot hold
+    line: fc.oneof(fc.integer({ min: 0, max: 30 }), fc.constantFrom(2.5, 2 ** 40, -0)),
+    column: fc.oneof(fc.integer({ min: 0, max: 3 }), fc.constantFrom(1.5, 2 ** 33)),
+    field: fc.constantFrom('dHf', 'S', 'cp_coeffs'),
+  },
   { requiredKeys: ['file', 'line'] },
 );
 const extras = fc.record(
