@@ -450,7 +450,7 @@ export class SpeciesStore {
     };
   }
 
-  /** Every species built, in view() order: for small tables (the lnk, diff and export commands, tests). */
+  /** Every species built, in view() order: for small tables and tests. */
   list(): Species[] {
     const v = this.view();
     return Array.from({ length: v.length }, (_, i) => v.at(i));

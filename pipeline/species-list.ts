@@ -18,7 +18,7 @@ export interface SpeciesList {
   cpCount(i: number): number;
 }
 
-/** A list over Species objects already in memory (small tables, tests, the lnk and diff commands). */
+/** A list over Species objects already in memory (small tables, tests). */
 export function arrayList(species: readonly Species[]): SpeciesList {
   return {
     length: species.length,

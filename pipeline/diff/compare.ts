@@ -3,6 +3,7 @@
 import { formatFormula } from '../chemistry/formula.js';
 import { toDeclared } from '../units/convert.js';
 import type { CpSpec, Finding, Location, Species } from '../types.js';
+import type { SpeciesList } from '../species-list.js';
 
 /** Fields compared, in report order. `cp` is the whole Cp description; `sources` the set of source texts. */
 export const DIFF_FIELDS = ['formula', 'dHf', 'dGf', 'S', 'u_dHf', 'u_dGf', 'u_S', 'P_ref', 'cp', 'sources'] as const;
@@ -154,17 +155,31 @@ export function compareSpecies(a: Species, b: Species): FieldChange[] {
   return out;
 }
 
-export function compareSpeciesLists(oldList: readonly Species[], newList: readonly Species[]): SpeciesDiff {
-  const oldBy = new Map(oldList.map((s) => [s.key, s]));
-  const newBy = new Map(newList.map((s) => [s.key, s]));
-  const added = newList.filter((s) => !oldBy.has(s.key)).map(refOf);
-  const removed = oldList.filter((s) => !newBy.has(s.key)).map(refOf);
+export function compareSpeciesLists(oldList: SpeciesList, newList: SpeciesList): SpeciesDiff {
+  // both lists are in the store's order (name, then phase, as `<` orders them): one walk, one species
+  // of each version built at a time, so two 10^6-row versions are never held as objects
+  const order = (i: number, j: number): number => {
+    const na = oldList.name(i);
+    const nb = newList.name(j);
+    if (na !== nb) return na < nb ? -1 : 1;
+    const pa = oldList.phase(i);
+    const pb = newList.phase(j);
+    return pa < pb ? -1 : pa > pb ? 1 : 0;
+  };
+  const added: SpeciesRef[] = [];
+  const removed: SpeciesRef[] = [];
   const changed: SpeciesChange[] = [];
-  for (const b of newList) {
-    const a = oldBy.get(b.key);
-    if (!a) continue;
-    const changes = compareSpecies(a, b);
-    if (changes.length) changed.push({ ...refOf(b), changes });
+  let i = 0;
+  let j = 0;
+  while (i < oldList.length || j < newList.length) {
+    const c = i >= oldList.length ? 1 : j >= newList.length ? -1 : order(i, j);
+    if (c < 0) removed.push(refOf(oldList.at(i++)));
+    else if (c > 0) added.push(refOf(newList.at(j++)));
+    else {
+      const b = newList.at(j++);
+      const changes = compareSpecies(oldList.at(i++), b);
+      if (changes.length) changed.push({ ...refOf(b), changes });
+    }
   }
   return { added, removed, changed };
 }

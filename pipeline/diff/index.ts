@@ -10,9 +10,10 @@ import { resolve } from 'node:path';
 import { check, compareFindings as byLocation } from '../check.js';
 import { loadReference } from '../chemistry/reference.js';
 import { loadReactions, type ReactionSpec } from '../equilibrium/reactions.js';
-import { loadSpecies } from '../equilibrium/species.js';
+import { loadStore } from '../equilibrium/species.js';
+import type { SpeciesList } from '../species-list.js';
 import { normalizeOptions, type Options } from '../options.js';
-import type { FailOn, Finding, OptionsNormalized, Report, Severity, Species, UseWindow } from '../types.js';
+import type { FailOn, Finding, OptionsNormalized, Report, Severity, UseWindow } from '../types.js';
 import { loadWaivers, waiveReport } from '../waivers.js';
 import { compareFindings, compareSpeciesLists, type SpeciesDiff } from './compare.js';
 import { lnKImpact, type ReactionDiff } from './lnk.js';
@@ -83,13 +84,14 @@ export function optionsFor(v: DiffVersionInput, failOn: FailOn, reactions?: stri
 interface Loaded {
   options: OptionsNormalized;
   report: Report;
-  species: Species[];
+  /** the version's species in the store's order, each built when asked for */
+  species: SpeciesList;
 }
 
 async function loadVersion(v: DiffVersionInput, opts: DiffOptions, run: { version: string; generatedAt: string; waiverDay: string }): Promise<Loaded> {
   const options = optionsFor(v, opts.failOn, opts.reactionsFile);
   let report = await check(options, run);
-  const { species } = await loadSpecies(options);
+  const species = (await loadStore(options)).store.view(); // check() keeps no rows: the species are read again
   if (options.waiversFile) report = waiveReport(report, loadWaivers(options.waiversFile), run.waiverDay);
   return { options, report, species };
 }

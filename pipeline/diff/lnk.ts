@@ -7,6 +7,7 @@ import { computeReaction } from '../equilibrium/lnk.js';
 import { resolveReactions, type ReactionSpec, type ResolvedReaction } from '../equilibrium/reactions.js';
 import type { ReferenceData, Species, UseWindow } from '../types.js';
 import type { FieldChange, SpeciesDiff } from './compare.js';
+import type { SpeciesList } from '../species-list.js';
 
 export interface ReactionDiffPoint {
   T: number;
@@ -27,7 +28,7 @@ export interface ReactionDiff {
 }
 
 /** Species that a reaction term could name (by name or formula): the only ones resolution looks at. */
-function relevant(specs: readonly ReactionSpec[], species: readonly Species[]): Species[] {
+function relevant(specs: readonly ReactionSpec[], species: SpeciesList): Species[] {
   const names = new Set<string>();
   const formulas = new Set<string>();
   for (const s of specs) {
@@ -37,7 +38,9 @@ function relevant(specs: readonly ReactionSpec[], species: readonly Species[]): 
       if (t.formula) formulas.add(formatFormula(t.formula));
     }
   }
-  return species.filter((sp) => names.has(sp.name) || formulas.has(formatFormula(sp.formula)));
+  const out: Species[] = [];
+  for (let i = 0; i < species.length; i++) if (names.has(species.name(i)) || formulas.has(formatFormula(species.formula(i)))) out.push(species.at(i));
+  return out;
 }
 
 const specKey = (x: { id: string; file: string; line: number }): string => `${x.file}:${x.line}:${x.id}`;
@@ -83,8 +86,8 @@ const NOT_IN_LNK: Record<string, string> = {
  */
 export function lnKImpact(
   specs: readonly ReactionSpec[],
-  oldSpecies: readonly Species[],
-  newSpecies: readonly Species[],
+  oldSpecies: SpeciesList,
+  newSpecies: SpeciesList,
   diff: SpeciesDiff,
   reference: ReferenceData,
   window: UseWindow,
