@@ -83,7 +83,8 @@ export class FindingStore implements FindingList {
   private addParams(i: number, params: Record<string, number | string>): void {
     const text = jsonSafe(params) ? JSON.stringify(params) : undefined;
     const n = text === undefined ? POOL_CHUNK + 1 : Buffer.byteLength(text);
-    if (n > POOL_CHUNK) {
+    // too long for a chunk, or past what a 32-bit offset reaches (2 GB of params: tens of millions of findings)
+    if (n > POOL_CHUNK || this.pool.length * POOL_CHUNK >= 0x7fffffff - POOL_CHUNK) {
       this.rare.params.set(i, params);
       this.paramsAt.push(-1);
       this.paramsBytes.push(0);
