@@ -32,7 +32,7 @@ export function compareFindings(a: Finding, b: Finding): number {
   return a.message < b.message ? -1 : a.message > b.message ? 1 : 0;
 }
 
-export function summarize(rows: number, accepted: number, rejected: number, species: number, findings: Iterable<Finding>): Summary {
+export function summarize(rows: number, accepted: number, rejected: number, species: number, findings: Iterable<Pick<Finding, 'severity' | 'waived'>>): Summary {
   let errors = 0;
   let warnings = 0;
   let infos = 0;
@@ -130,7 +130,7 @@ export async function check(options: OptionsNormalized, run: RunInfo): Promise<R
   return {
     tool: { name: 'thermovet', version: run.version },
     dataset: { name: options.name, useWindow: options.useWindow },
-    summary: summarize(rows, accepted, rejected, species.length, findings),
+    summary: summarize(rows, accepted, rejected, species.length, findings.severities()),
     findings,
     species: summaries,
     reactions: reactions ?? [], // always present: empty when no reactions file is given

@@ -155,6 +155,11 @@ export class FindingStore implements FindingList {
     return s < 0 || p < 0 ? undefined : `${this.names.name(s)}|${this.texts.get(p)}`;
   }
 
+  /** Severity and waiver of each finding, without making the findings: what a summary counts. */
+  *severities(): Iterable<Pick<Finding, 'severity' | 'waived'>> {
+    for (let i = 0; i < this.length; i++) yield { severity: this.kindParts[this.kind.get(i)]!.severity, waived: this.rare.waived.get(i) };
+  }
+
   setImpact(position: number, impact: NonNullable<Finding['impact']>): void {
     this.rare.impact.set(this.index(position), impact);
   }

@@ -133,5 +133,5 @@ export function waiveReport(report: Report, waivers: Waiver[], today: string): R
   for (const f of apply.findingsAboutWaivers()) findings.add(f);
   findings.sort();
   const s = report.summary;
-  return { ...report, summary: summarize(s.rows, s.accepted, s.rejected, s.species, findings), findings };
+  return { ...report, summary: summarize(s.rows, s.accepted, s.rejected, s.species, findings.severities()), findings };
 }

@@ -53,6 +53,18 @@ export function worstFindings(findings: FindingList, limit: number, keep: (f: Fi
   return top;
 }
 
+/** How many findings each severity and rule has, most first (ties in report order): the summary under the worst ones. */
+export function findingsByRule(findings: FindingList): { severity: Severity; rule: string; count: number }[] {
+  const counts = new Map<string, { severity: Severity; rule: string; count: number }>();
+  for (const f of findings) {
+    const key = `${f.severity}\u0000${f.rule}`;
+    const entry = counts.get(key);
+    if (entry) entry.count++;
+    else counts.set(key, { severity: f.severity, rule: f.rule, count: 1 });
+  }
+  return [...counts.values()].sort((a, b) => b.count - a.count);
+}
+
 export function renderTerminal(report: Report, opts: TerminalOptions): string {
   const c = paint(opts.color);
   const limit = opts.limit ?? 25;
@@ -86,11 +98,9 @@ export function renderTerminal(report: Report, opts: TerminalOptions): string {
     }
   }
   if (shown.length < report.findings.length) {
-    const perRule = new Map<string, number>();
-    for (const f of report.findings) perRule.set(`${f.severity} ${f.rule}`, (perRule.get(`${f.severity} ${f.rule}`) ?? 0) + 1);
     out.push('');
     out.push(c.bold('All findings by rule'));
-    for (const [k, n] of [...perRule].sort((a, b) => b[1] - a[1])) out.push(`  ${String(n).padStart(7)}  ${k}`);
+    for (const r of findingsByRule(report.findings)) out.push(`  ${String(r.count).padStart(7)}  ${r.severity} ${r.rule}`);
   }
   return out.join('\n') + '\n';
 }

@@ -1,6 +1,6 @@
 // Reports are written atomically: a temporary file beside the target, then a rename, so a killed run
 // never leaves a truncated report that CI could take for a valid one.
-import { closeSync, mkdirSync, openSync, renameSync, rmSync, statSync, writeFileSync, writeSync } from 'node:fs';
+import { closeSync, mkdirSync, openSync, renameSync, rmSync, statSync, writeSync } from 'node:fs';
 import { basename, dirname, join } from 'node:path';
 import { InputError } from '../pipeline/errors.js';
 
@@ -28,24 +28,10 @@ export function makeDirs(dir: string): void {
 }
 
 export function writeAtomic(path: string, content: string): void {
-  const dir = dirname(path);
-  const tmp = join(dir, `.${basename(path)}.${process.pid}.tmp`);
-  try {
-    makeDirs(dir);
-    writeFileSync(tmp, content);
-    renameSync(tmp, path);
-  } catch (e) {
-    try {
-      rmSync(tmp, { force: true }); // `force` ignores only ENOENT; under a regular file this throws ENOTDIR
-    } catch {
-      // nothing was created there
-    }
-    const code = (e as NodeJS.ErrnoException).code ?? 'error';
-    throw new InputError('unwritable-output', `cannot write the report (${code})`, { file: path });
-  }
+  writeAtomicChunks(path, [content]);
 }
 
-/** The same, for a report made in pieces (JSON, SARIF): written as they come, never held as one string. */
+/** A report made in pieces (JSON, SARIF), written as they come and never held as one string; a temporary file renamed into place. */
 export function writeAtomicChunks(path: string, chunks: Iterable<string>): void {
   const dir = dirname(path);
   const tmp = join(dir, `.${basename(path)}.${process.pid}.tmp`);
@@ -60,7 +46,7 @@ export function writeAtomicChunks(path: string, chunks: Iterable<string>): void 
   } catch (e) {
     try {
       if (fd !== undefined) closeSync(fd);
-      rmSync(tmp, { force: true });
+      rmSync(tmp, { force: true }); // `force` ignores only ENOENT; under a regular file this throws ENOTDIR
     } catch {
       // nothing was created there
     }

@@ -6,7 +6,7 @@ import { formatNumber } from '../../pipeline/rules/finding.js';
 import { RULES } from '../../pipeline/rules/index.js';
 import { failingCount } from '../../pipeline/verdict.js';
 import { CHART_SPECIES_LIMIT, type FailOn, type Finding, type ReactionResult, type Report, type SpeciesSummary } from '../../pipeline/types.js';
-import { impactOf, worstFindings } from '../terminal.js';
+import { findingsByRule, impactOf, worstFindings } from '../terminal.js';
 import { chartKey, cpChartSpec, gibbsChartSpec, LNK_HEIGHT, lnKChartSpec, renderSvg, speciesLabel, windowSpan, type Tolerance } from './charts.js';
 import { esc } from './escape.js';
 import { CSS } from './style.js';
@@ -144,13 +144,8 @@ function findingsSection(report: Report, chartAnchor: Map<string, string>): stri
     );
   }
   if (shown.length < total) {
-    const perRule = new Map<string, number>();
-    for (const f of report.findings) perRule.set(`${f.severity}\u0000${f.rule}`, (perRule.get(`${f.severity}\u0000${f.rule}`) ?? 0) + 1);
     out.push('<h3>All findings by rule</h3><table><thead><tr><th>severity</th><th>rule</th><th class="num">findings</th></tr></thead><tbody>');
-    for (const [k, c] of [...perRule].sort((a, b) => b[1] - a[1])) {
-      const [sev, rule] = k.split('\u0000');
-      out.push(`<tr><td>${esc(sev)}</td><td><code>${esc(rule)}</code></td><td class="num">${c}</td></tr>`);
-    }
+    for (const r of findingsByRule(report.findings)) out.push(`<tr><td>${esc(r.severity)}</td><td><code>${esc(r.rule)}</code></td><td class="num">${r.count}</td></tr>`);
     out.push('</tbody></table>');
   }
   out.push('</section>');

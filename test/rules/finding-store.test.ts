@@ -2,7 +2,7 @@
 // what went in, for any finding, and its order after sort() must be compareFindings' order.
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { compareFindings } from '../../pipeline/check.js';
+import { compareFindings, summarize } from '../../pipeline/check.js';
 import { FindingStore } from '../../pipeline/finding-store.js';
 import { makeFinding } from '../../pipeline/rules/finding.js';
 import type { Finding, Rule } from '../../pipeline/types.js';
@@ -63,6 +63,7 @@ describe('finding store', () => {
       fc.property(fc.array(findingArb, { maxLength: 40 }), (findings) => {
         const store = stored(findings);
         expect(store.length).toBe(findings.length);
+        expect(summarize(0, 0, 0, 0, store.severities())).toEqual(summarize(0, 0, 0, 0, findings));
         findings.forEach((f, i) => {
           const back = store.at(i);
           expect(Object.getPrototypeOf(back)).toBe(Object.prototype);
